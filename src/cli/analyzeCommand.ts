@@ -1,0 +1,83 @@
+import { writeFile } from 'node:fs/promises';
+import { basename } from 'node:path';
+import { analyzeSequence } from '../core/analyze';
+import { parseSourceSpec } from '../core/sources/catalog';
+import type { Sequence } from '../core/sequence/sequence';
+import type { AnalysisResult } from '../core/result/analysisResult';
+import { guessFileFormat } from './guessFileFormat';
+import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
+import { readInputFile } from './readInput';
+import { summaryText } from './summaryText';
+import { UsageError } from './usageError';
+
+type Values = Record<string, string | boolean | undefined>;
+
+interface Loaded {
+  sequence: Sequence;
+  input: { name: string; sha256: string | null; format: string };
+  reference: AnalysisResult['reference'];
+  readSeconds: number;
+}
+
+async function load(file: string | undefined, values: Values): Promise<Loaded> {
+  const t0 = performance.now();
+  if (values.source !== undefined) {
+    if (file !== undefined) throw new UsageError('give either a FILE or --source, not both');
+    const source = parseSourceSpec(String(values.source));
+    const length = numberOption(values, 'length', isPositiveInteger, 'a whole number of at least 1');
+    if (length === undefined) throw new UsageError('--source needs --length');
+    const seed = numberOption(values, 'seed', Number.isSafeInteger, 'a whole number') ?? 1;
+    const sequence = source.generate(length, seed);
+    return {
+      sequence,
+      input: { name: `${source.id} (length ${length}, seed ${seed})`, sha256: null, format: 'generated' },
+      reference: { source: source.id, entropyRate: source.facts.entropyRate, sigma2: source.facts.sigma2 },
+      readSeconds: (performance.now() - t0) / 1000,
+    };
+  }
+  if (file === undefined) throw new UsageError('analyze needs a FILE (or --source SPEC --length L)');
+  const options = readerOptionsFrom(values, values.format === undefined ? await guessFileFormat(file) : 'chars');
+  const read = await readInputFile(file, options);
+  for (const w of read.warnings) process.stderr.write(`returnrate: note: ${w.message}\n`);
+  return {
+    sequence: read.sequence,
+    input: { name: basename(file), sha256: read.sha256, format: options.format },
+    reference: null,
+    readSeconds: (performance.now() - t0) / 1000,
+  };
+}
+
+/** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
+export async function analyzeCommand(file: string | undefined, values: Values): Promise<void> {
+  const settings = settingsFrom(values);
+  const loaded = await load(file, values);
+  const t1 = performance.now();
+  // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
+  let positionLevels = loaded.sequence.symbols.length;
+  let lastActive = 0;
+  const result = analyzeSequence(loaded.sequence, loaded.input, settings, {
+    onLevel: (_n, active) => {
+      positionLevels += active;
+      lastActive = active;
+    },
+    reference: loaded.reference,
+  });
+  const analysisSeconds = (performance.now() - t1) / 1000;
+  const json = values.json === undefined ? undefined : String(values.json);
+  if (json === '-') process.stdout.write(JSON.stringify(result, null, 2) + '\n');
+  else {
+    if (json !== undefined) await writeFile(json, JSON.stringify(result, null, 2) + '\n');
+    if (values.quiet !== true) process.stdout.write(summaryText(result, { table: values['no-table'] !== true }));
+  }
+  if (values.timing === true) {
+    // For the benchmark: one JSON line on standard error.
+    const timing = {
+      symbols: loaded.sequence.symbols.length,
+      readSeconds: loaded.readSeconds,
+      analysisSeconds,
+      positionLevels: positionLevels - lastActive,
+      peakRssBytes: process.resourceUsage().maxRSS * 1024,
+    };
+    process.stderr.write(`timing ${JSON.stringify(timing)}\n`);
+  }
+}

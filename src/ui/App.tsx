@@ -1,0 +1,49 @@
+import { useEffect } from 'react';
+import { ErrorBoundary } from './panels/ErrorBoundary';
+import { FailureAlert } from './panels/FailureAlert';
+import { InputPanel } from './panels/InputPanel';
+import { LengthTablePanel } from './panels/LengthTablePanel';
+import { RunPanel } from './panels/RunPanel';
+import { SettingsPanel } from './panels/SettingsPanel';
+import { SummaryPanel } from './panels/SummaryPanel';
+import { openDemoIfEmpty } from './runner';
+
+/** The workbench shell: header, controls on the left, results on the right. */
+export function App() {
+  useEffect(() => openDemoIfEmpty(), []);
+  return (
+    <div className="app">
+      <header className="app-header">
+        <h1>returnrate</h1>
+        <p>Entropy rate of a symbol sequence from the return times of its blocks, with error bars.</p>
+      </header>
+      <ErrorBoundary name="The error message">
+        <FailureAlert />
+      </ErrorBoundary>
+      <main className="layout">
+        <div className="column">
+          <ErrorBoundary name="Input">
+            <InputPanel />
+          </ErrorBoundary>
+          <ErrorBoundary name="Run">
+            <RunPanel />
+          </ErrorBoundary>
+          <ErrorBoundary name="Settings">
+            <SettingsPanel />
+          </ErrorBoundary>
+        </div>
+        <div className="column wide">
+          <ErrorBoundary name="Estimate">
+            <SummaryPanel />
+          </ErrorBoundary>
+          <ErrorBoundary name="Per-n table">
+            <LengthTablePanel />
+          </ErrorBoundary>
+        </div>
+      </main>
+      <footer className="app-footer">
+        Demo data are invented. Estimates are research estimates, not a diagnosis; everything runs in this browser tab and no data leave it.
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,102 @@
+import { proxy, transfer, wrap } from 'comlink';
+import type { Remote } from 'comlink';
+import type { AnalysisResult, AnalysisSettings } from '../core/result/analysisResult';
+import type { AnalysisApi, AnalysisProgress, FileReadOptions } from '../../workers/analysis.worker';
+
+export type { AnalysisProgress, FileReadOptions };
+
+/** Every call can be stopped; progress is optional. */
+export interface CallOptions {
+  readonly signal: AbortSignal;
+  readonly onProgress?: (progress: AnalysisProgress) => void;
+}
+
+/**
+ * The page's handle on the analysis worker. One call at a time is the intended use: aborting any
+ * call terminates the worker (the only way to stop a tight loop), so every pending call rejects
+ * with an AbortError, and the next call starts a fresh worker.
+ */
+export interface AnalysisClient {
+  /** Streams a File or Blob through the reader in the worker (the page stays responsive for large files). */
+  analyzeFile(file: Blob, options: FileReadOptions, settings: AnalysisSettings, call: CallOptions): Promise<AnalysisResult>;
+  /** Moves the buffer to the worker (transferred, so it is detached here afterwards). */
+  analyzeBytes(bytes: ArrayBuffer, options: FileReadOptions, settings: AnalysisSettings, call: CallOptions): Promise<AnalysisResult>;
+  analyzeDemo(id: string, length: number, seed: number, settings: AnalysisSettings, call: CallOptions): Promise<AnalysisResult>;
+  /** Terminates the worker if one runs; pending calls reject with an AbortError. */
+  dispose(): void;
+}
+
+/** Anything with the Worker surface the client uses; tests hand in a fake. */
+export type WorkerLike = Pick<Worker, 'terminate' | 'addEventListener'> & Parameters<typeof wrap>[0];
+
+function startAnalysisWorker(): Worker {
+  return new Worker(new URL('../../workers/analysis.worker.ts', import.meta.url), { type: 'module', name: 'returnrate-analysis' });
+}
+
+function abortError(signal: AbortSignal): unknown {
+  return signal.reason ?? new DOMException('The analysis was cancelled.', 'AbortError');
+}
+
+const ignoreProgress = (): void => {};
+
+/** A client that starts its worker lazily with `start` (default: workers/analysis.worker.ts as a module worker). */
+export function createAnalysisClient(start: () => WorkerLike = startAnalysisWorker): AnalysisClient {
+  let worker: WorkerLike | null = null;
+  let remote: Remote<AnalysisApi> | null = null;
+  const pending = new Set<(reason: unknown) => void>();
+
+  const stop = (reason: unknown): void => {
+    worker?.terminate();
+    worker = null;
+    remote = null;
+    for (const reject of [...pending]) reject(reason);
+    pending.clear();
+  };
+
+  const ensure = (): Remote<AnalysisApi> => {
+    if (remote !== null) return remote;
+    const w = start();
+    // A worker that fails to load or throws outside a call would leave calls hanging; fail them.
+    w.addEventListener('error', (event: Event) => {
+      const detail = (event as Partial<ErrorEvent>).message;
+      const message = typeof detail === 'string' && detail !== '' ? detail : 'the worker could not start or stopped unexpectedly';
+      if (worker === w) stop(new Error(`Analysis worker failed: ${message}`));
+    });
+    worker = w;
+    remote = wrap<AnalysisApi>(w);
+    return remote;
+  };
+
+  const call = <T>(options: CallOptions, run: (api: Remote<AnalysisApi>, onProgress: (p: AnalysisProgress) => void) => Promise<T>): Promise<T> => {
+    const { signal } = options;
+    if (signal.aborted) return Promise.reject(abortError(signal));
+    const api = ensure();
+    const onProgress = proxy(options.onProgress ?? ignoreProgress);
+    return new Promise<T>((resolve, reject) => {
+      const onAbort = (): void => stop(abortError(signal));
+      const settle = (): void => {
+        pending.delete(reject);
+        signal.removeEventListener('abort', onAbort);
+      };
+      pending.add(reject);
+      signal.addEventListener('abort', onAbort, { once: true });
+      run(api, onProgress).then(
+        (value) => {
+          settle();
+          resolve(value);
+        },
+        (error: unknown) => {
+          settle();
+          reject(error);
+        },
+      );
+    });
+  };
+
+  return {
+    analyzeFile: (file, options, settings, c) => call(c, (api, p) => api.analyzeBytes(file, options, settings, p)),
+    analyzeBytes: (bytes, options, settings, c) => call(c, (api, p) => api.analyzeBytes(transfer(bytes, [bytes]), options, settings, p)),
+    analyzeDemo: (id, length, seed, settings, c) => call(c, (api, p) => api.analyzeDemo(id, length, seed, settings, p)),
+    dispose: () => stop(new DOMException('The analysis worker was shut down.', 'AbortError')),
+  };
+}

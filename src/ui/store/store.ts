@@ -1,0 +1,98 @@
+import { createStore } from 'zustand/vanilla';
+import { useStore } from 'zustand';
+import { createJSONStorage, persist } from 'zustand/middleware';
+import type { StateStorage } from 'zustand/middleware';
+import type { StoreApi } from 'zustand/vanilla';
+import { initialInputState, inputActions } from './inputSlice';
+import type { InputState } from './inputSlice';
+import { initialResultState, restoreResult, resultActions, resultForStorage } from './resultSlice';
+import type { ResultState } from './resultSlice';
+import { initialRunState, runActions } from './runSlice';
+import type { RunState } from './runSlice';
+import { initialSettingsState, restoreSettings, settingsActions } from './settingsSlice';
+import type { SettingsState } from './settingsSlice';
+
+export type AppState = InputState & SettingsState & RunState & ResultState;
+/** What slice actions need of a store. */
+export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
+
+/** Key and version of the saved state in localStorage; bump the version when its shape changes. */
+export const STORAGE_KEY = 'returnrate.workbench';
+const STORAGE_VERSION = 1;
+
+/** The part that survives a reload: settings and the last result (see resultForStorage). */
+export type PersistedState = SettingsState & ResultState;
+
+export function persistedPart(state: AppState): PersistedState {
+  return { settings: state.settings, ...resultForStorage(state) };
+}
+
+/** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
+export function mergePersisted(stored: unknown, current: AppState): AppState {
+  const s = typeof stored === 'object' && stored !== null ? (stored as Partial<Record<keyof PersistedState, unknown>>) : {};
+  return { ...current, settings: restoreSettings(s.settings), ...restoreResult(s) };
+}
+
+/**
+ * One store for the whole page: the four slices' state, saved (settings and last result only) to
+ * `storage` under STORAGE_KEY. Tests pass an in-memory storage.
+ */
+export function createAppStore(storage: () => StateStorage) {
+  return createStore<AppState>()(
+    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState }), {
+      name: STORAGE_KEY,
+      version: STORAGE_VERSION,
+      storage: createJSONStorage(storage),
+      partialize: persistedPart,
+      merge: mergePersisted,
+    }),
+  );
+}
+
+/** An in-memory StateStorage, for tests and for pages where localStorage is unavailable. */
+export function memoryStorage(): StateStorage {
+  const items = new Map<string, string>();
+  return {
+    getItem: (name) => items.get(name) ?? null,
+    setItem: (name, value) => void items.set(name, value),
+    removeItem: (name) => void items.delete(name),
+  };
+}
+
+function pageStorage(): StateStorage {
+  try {
+    if (typeof localStorage !== 'undefined') return localStorage;
+  } catch {
+    // Access can throw when storage is disabled; the page then forgets on reload.
+  }
+  return memoryStorage();
+}
+
+/** All slice actions bound to one store. */
+export function bindActions(store: StoreHandle) {
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store) };
+}
+
+/** The page's store. */
+export const appStore = createAppStore(pageStorage);
+
+/** Selects one field (or a derived value) of the page's store in a component. */
+export function useAppState<T>(selector: (state: AppState) => T): T {
+  return useStore(appStore, selector);
+}
+
+export const {
+  setFormat,
+  setCsvColumn,
+  setDemoLength,
+  chooseInput,
+  updateSettings,
+  resetSettings,
+  beginRun,
+  reportProgress,
+  completeRun,
+  cancelRun,
+  failRun,
+  dismissFailure,
+  clearResult,
+} = bindActions(appStore);

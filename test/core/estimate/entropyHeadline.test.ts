@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest';
+import { chooseEntropyHeadline, type HeadlineCandidates } from '../../../src/core/estimate/entropyHeadline';
+import type { EstimatorResult } from '../../../src/core/estimate/estimatorResult';
+import type { PluginConditionalResult } from '../../../src/core/estimate/pluginConditional';
+
+const none: EstimatorResult = { estimate: null, standardError: null, interval: null, lengthsUsed: null, note: '' };
+const est = (estimate: number, se: number, n: [number, number] = [5, 6]): EstimatorResult => ({
+  estimate,
+  standardError: se,
+  interval: [estimate - 2 * se, estimate + 2 * se],
+  lengthsUsed: n,
+  note: '',
+});
+const plugin = (estimate: number, converged: boolean, k = 4): PluginConditionalResult => ({
+  ...est(estimate, 0.001, [k, k]),
+  k,
+  wellSampled: 6,
+  step: converged ? 0.0001 : 0.01,
+  stepStandardError: 0.001,
+  converged,
+});
+const candidates = (over: Partial<HeadlineCandidates>): HeadlineCandidates => ({
+  returnSlope: none,
+  pluginConditional: { ...none, k: 0, wellSampled: 0, step: null, stepStandardError: null, converged: false },
+  returnMean: none,
+  matchLength: none,
+  ...over,
+});
+
+describe('chooseEntropyHeadline', () => {
+  it('prefers the plug-in when the conditional entropies have reached a plateau', () => {
+    // source: the stated rule (entropyHeadline.ts)
+    const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.69, 0.002), pluginConditional: plugin(0.693, true) }), 'nat/symbol');
+    expect(c.method).toBe('plugin-conditional');
+    expect(c.warnings).toEqual([]);
+    expect(c.reason).toContain('plateau at k = 4');
+  });
+
+  it('warns when a return slope disagrees with a converged plug-in by more than three standard errors', () => {
+    // source: the stated rule: |0.68 - 0.693| = 0.013 > 3 * hypot(0.002, 0.001) = 0.0067
+    const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.68, 0.002), pluginConditional: plugin(0.693, true) }), 'nat/symbol');
+    expect(c.warnings.map((w) => w.code)).toEqual(['estimators-disagree']);
+  });
+
+  it('takes the return slope when the block entropies are still falling', () => {
+    // source: the stated rule
+    const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.5, 0.01), pluginConditional: plugin(0.52, false) }), 'bit/symbol');
+    expect(c.method).toBe('return-slope');
+    expect(c.reason).toContain('still falling');
+    expect(c.reason).toContain('bit/symbol');
+  });
+
+  it('falls back to the plug-in, then the mean return, then match lengths, each with a warning', () => {
+    // source: the stated rule
+    expect(chooseEntropyHeadline(candidates({ pluginConditional: plugin(0.5, false) }), 'nat').method).toBe('plugin-conditional');
+    const mean = chooseEntropyHeadline(candidates({ returnMean: est(0.4, 0.01) }), 'nat');
+    expect([mean.method, mean.warnings[0]!.code]).toEqual(['return-mean', 'headline-fallback']);
+    expect(chooseEntropyHeadline(candidates({ matchLength: est(0.6, 0.01) }), 'nat').method).toBe('match-length');
+    const nothing = chooseEntropyHeadline(candidates({}), 'nat');
+    expect([nothing.method, nothing.warnings[0]!.code]).toEqual(['none', 'no-estimate']);
+  });
+});

@@ -1,0 +1,94 @@
+import { expose } from 'comlink';
+import { describe, expect, it } from 'vitest';
+import type { AnalysisResult } from '../../src/core/result/analysisResult';
+import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
+import type { AnalysisProgress } from '../../src/ui/analysisClient';
+import { createAnalysisClient } from '../../src/ui/analysisClient';
+import type { WorkerLike } from '../../src/ui/analysisClient';
+import { fakeResult } from './fixtures';
+
+/**
+ * A stand-in worker on a MessageChannel: the test exposes an api on one port and the client talks to
+ * the other, as it would to a real worker.
+ */
+function fakeWorkers(api: Record<string, unknown>) {
+  const started: { terminated: boolean }[] = [];
+  const start = (): WorkerLike => {
+    const { port1, port2 } = new MessageChannel();
+    expose(api, port2);
+    const record = { terminated: false };
+    started.push(record);
+    return Object.assign(port1, {
+      terminate: () => {
+        record.terminated = true;
+        port1.close();
+        port2.close();
+      },
+    }) as unknown as WorkerLike;
+  };
+  return { start, started };
+}
+
+const never = (): Promise<never> => new Promise(() => {});
+
+describe('analysis client', () => {
+  it('starts no worker until the first call, and reuses it afterwards', async () => {
+    const result = fakeResult();
+    const { start, started } = fakeWorkers({ analyzeDemo: () => result });
+    const client = createAnalysisClient(start);
+    expect(started).toHaveLength(0);
+    const signal = new AbortController().signal;
+    await expect(client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal })).resolves.toEqual(result);
+    await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal });
+    expect(started).toHaveLength(1);
+    client.dispose();
+  });
+
+  it('delivers progress through the proxied callback', async () => {
+    const api = {
+      analyzeDemo: (_id: string, _n: number, _seed: number, _s: unknown, onProgress: (p: AnalysisProgress) => Promise<void>) =>
+        onProgress({ kind: 'level', n: 2, active: 17 }).then(() => fakeResult()),
+    };
+    const { start } = fakeWorkers(api);
+    const client = createAnalysisClient(start);
+    const seen: AnalysisProgress[] = [];
+    await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal, onProgress: (p) => seen.push(p) });
+    expect(seen).toEqual([{ kind: 'level', n: 2, active: 17 }]);
+    client.dispose();
+  });
+
+  it('rejects with the core message intact', async () => {
+    const { start } = fakeWorkers({
+      analyzeDemo: () => {
+        throw new RangeError('maxN must be an integer from 1 to N - 1 = 9; got 40');
+      },
+    });
+    const client = createAnalysisClient(start);
+    const error: unknown = await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal }).catch((e: unknown) => e);
+    expect(error).toMatchObject({ name: 'RangeError', message: 'maxN must be an integer from 1 to N - 1 = 9; got 40' });
+    client.dispose();
+  });
+
+  it('abort terminates the worker, rejects with an AbortError, and the next call starts a new worker', async () => {
+    const result = fakeResult();
+    const { start, started } = fakeWorkers({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
+    const client = createAnalysisClient(start);
+    const controller = new AbortController();
+    const pending = client.analyzeDemo('hang', 10, 1, DEFAULT_SETTINGS, { signal: controller.signal });
+    controller.abort();
+    await expect(pending).rejects.toMatchObject({ name: 'AbortError' });
+    expect(started[0]?.terminated).toBe(true);
+    await expect(client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal })).resolves.toEqual(result);
+    expect(started).toHaveLength(2);
+    client.dispose();
+  });
+
+  it('a call with an already aborted signal rejects without starting a worker', async () => {
+    const { start, started } = fakeWorkers({});
+    const client = createAnalysisClient(start);
+    const controller = new AbortController();
+    controller.abort();
+    await expect(client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: controller.signal })).rejects.toMatchObject({ name: 'AbortError' });
+    expect(started).toHaveLength(0);
+  });
+});

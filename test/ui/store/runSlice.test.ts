@@ -1,0 +1,76 @@
+import { describe, expect, it } from 'vitest';
+import { ReadError } from '../../../src/core/sequence/readError';
+import { describeFailure, isAbortError } from '../../../src/ui/store/runSlice';
+import { fakeResult } from '../fixtures';
+import { testStore } from './testStore';
+
+describe('run slice', () => {
+  it('beginRun gives each run a new id and starts without progress', () => {
+    const s = testStore();
+    const first = s.beginRun('a', 40);
+    const second = s.beginRun('b', 20);
+    expect(second).toBe(first + 1);
+    expect(s.store.getState().run).toEqual({ status: 'running', id: second, label: 'b', maxN: 20, progress: null });
+  });
+
+  it('reports of an older run are ignored once a newer one started', () => {
+    const s = testStore();
+    const old = s.beginRun('old', 40);
+    const current = s.beginRun('new', 40);
+    s.reportProgress(old, { kind: 'level', n: 9, active: 5 });
+    s.completeRun(old, fakeResult());
+    s.failRun(old, new Error('late'));
+    s.cancelRun(old);
+    const state = s.store.getState();
+    expect(state.run).toMatchObject({ status: 'running', id: current, progress: null });
+    expect(state.result).toBeNull();
+    expect(state.failure).toBeNull();
+    s.reportProgress(current, { kind: 'level', n: 3, active: 70 });
+    expect(s.store.getState().run).toMatchObject({ progress: { kind: 'level', n: 3, active: 70 } });
+  });
+
+  it('completeRun stores the result and returns to idle', () => {
+    const s = testStore();
+    const id = s.beginRun('x', 40);
+    const result = fakeResult();
+    s.completeRun(id, result);
+    expect(s.store.getState().result).toBe(result);
+    expect(s.store.getState().run).toEqual({ status: 'idle', note: null });
+  });
+
+  it('cancelRun returns to idle with a note and keeps the previous result', () => {
+    const s = testStore();
+    const result = fakeResult();
+    s.completeRun(s.beginRun('x', 40), result);
+    s.cancelRun(s.beginRun('y', 40));
+    const state = s.store.getState();
+    expect(state.run.status).toBe('idle');
+    expect(state.run.status === 'idle' && state.run.note).toMatch(/Cancelled/);
+    expect(state.result).toBe(result);
+  });
+
+  it('failRun keeps the core message unchanged and titles it by kind of error', () => {
+    const s = testStore();
+    const error = new ReadError('missing-column', "no column 'speed'; the header has time, sector", { line: 1 });
+    s.failRun(s.beginRun('“log.csv”', 40), error);
+    expect(s.store.getState().failure).toEqual({ title: 'Could not read “log.csv”', message: error.message });
+    s.dismissFailure();
+    expect(s.store.getState().failure).toBeNull();
+  });
+
+  it('describeFailure reads errors rebuilt by comlink (plain objects with name and message)', () => {
+    const rebuilt = Object.assign(new Error('maxN must be an integer from 1 to N - 1 = 9; got 40'), { name: 'RangeError' });
+    expect(describeFailure(rebuilt, 'the demo')).toEqual({
+      title: 'The analysis of the demo refused its input',
+      message: 'maxN must be an integer from 1 to N - 1 = 9; got 40',
+    });
+    expect(describeFailure('boom', 'x')).toEqual({ title: 'The analysis of x failed', message: 'boom' });
+    expect(describeFailure(new Error(''), 'x').message).toBe('no details were given');
+  });
+
+  it('isAbortError recognises AbortError by name only', () => {
+    expect(isAbortError(new DOMException('stop', 'AbortError'))).toBe(true);
+    expect(isAbortError(new Error('AbortError'))).toBe(false);
+    expect(isAbortError(null)).toBe(false);
+  });
+});

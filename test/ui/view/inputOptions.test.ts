@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { guessFormat } from '../../../src/core/sequence/guessFormat';
+import { chosenInputText, parseColumn, parseDemoLength, readerOptionsFor } from '../../../src/ui/view/inputOptions';
+
+describe('inputOptions', () => {
+  it('guessFormat goes by extension first, then by the longest field in the head of the file', () => {
+    expect(guessFormat('genome.FA', 'ACGT')).toBe('fasta');
+    expect(guessFormat('log.tsv', '')).toBe('csv');
+    expect(guessFormat('dump.bin', '')).toBe('bytes');
+    expect(guessFormat('wind.txt', 'N NE E SE\n')).toBe('tokens');
+    expect(guessFormat('coin.txt', 'a b a a\n')).toBe('chars');
+    expect(guessFormat('coin.txt', '0110100\n')).toBe('tokens');
+  });
+
+  it('guessFormat ignores the last field, which the sniff window may have cut', () => {
+    expect(guessFormat('x', 'a b cdef')).toBe('chars');
+  });
+
+  it('parseColumn reads digits as a 0-based index, other text as a header name, blank as default', () => {
+    expect(parseColumn(' 2 ')).toBe(2);
+    expect(parseColumn('sector')).toBe('sector');
+    expect(parseColumn('  ')).toBeUndefined();
+  });
+
+  it('readerOptionsFor passes the column only to the CSV reader', () => {
+    expect(readerOptionsFor('a.csv', '', 'auto', 'sector')).toEqual({ format: 'csv', column: 'sector' });
+    expect(readerOptionsFor('a.csv', '', 'auto', '')).toEqual({ format: 'csv' });
+    expect(readerOptionsFor('a.csv', '', 'tokens', 'sector')).toEqual({ format: 'tokens' });
+  });
+
+  it('parseDemoLength accepts integers in range only', () => {
+    expect(parseDemoLength('3000000')).toBe(3_000_000);
+    expect(parseDemoLength('999')).toBeNull();
+    expect(parseDemoLength('1e6')).toBeNull();
+    expect(parseDemoLength('')).toBeNull();
+  });
+
+  it('chosenInputText names the input', () => {
+    expect(chosenInputText(null)).toBe('none yet');
+    expect(chosenInputText({ kind: 'file', name: 'a.txt', bytes: 2048 })).toBe('a.txt (2.0 KiB)');
+    expect(chosenInputText({ kind: 'demo', id: 'd', length: 200_000, seed: 5 })).toBe('invented demo, 200,000 symbols, seed 5');
+  });
+});
