@@ -7,7 +7,7 @@ export interface ScanOptions {
   /** Largest block length, 1 <= maxN <= N. */
   readonly maxN: number;
   /** Number of fine batches of consecutive positions to aim for (rounded so the batch length is a
-   * power of two); default 1024. */
+   * power of two); default 256, enough for estimators that merge them into a few dozen. */
   readonly batchTarget?: number;
   /** Number of sampled forward paths to aim for (every stride-th position, stride a power of two);
    * default 256. */
@@ -54,7 +54,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) {
     throw new RangeError(`alphabetSize must be a positive integer; got ${alphabetSize}`);
   }
-  const batchLength = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 1024)));
+  const batchLength = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
   const batchShift = Math.log2(batchLength);
   const batchCount = Math.ceil(N / batchLength);
   const stride = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
@@ -132,10 +132,9 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     let sumLogRc2 = 0;
     let matchCount = 0;
     const histogram = new Float64Array(bins);
-    const batchObserved = new Float64Array(batchCount);
-    const batchSumLog = new Float64Array(batchCount);
-    const batchSumLog2 = new Float64Array(batchCount);
-    const batchSumLogCount = new Float64Array(batchCount);
+    // Per batch b: [observed, sum log R, sum (log R)^2, sum log count] at 4b..4b+3, one cache line
+    // per batch instead of four.
+    const batchAcc = new Float64Array(4 * batchCount);
 
     if (packed && refresh) refreshWords(symbols, offset, bits, perWord, order, activeLength, words, nextWords);
 
@@ -228,22 +227,22 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
           const logR2 = logR * logR;
           forwardSumLog += logR;
           forwardSumLog2 += logR2;
-          const batchP = p >>> batchShift;
-          batchSumLogCount[batchP] += logc;
+          const batchP = (p >>> batchShift) << 2;
+          batchAcc[batchP + 3] += logc;
           // How many of p (forward) and q (backward) take this return in the nearer-history view.
           let weight = 0;
           if (p < half) {
             weight = 1;
-            batchObserved[batchP]++;
-            batchSumLog[batchP] += logR;
-            batchSumLog2[batchP] += logR2;
+            batchAcc[batchP]++;
+            batchAcc[batchP + 1] += logR;
+            batchAcc[batchP + 2] += logR2;
           }
           if (q >= half) {
             weight++;
-            const batchQ = q >>> batchShift;
-            batchObserved[batchQ]++;
-            batchSumLog[batchQ] += logR;
-            batchSumLog2[batchQ] += logR2;
+            const batchQ = (q >>> batchShift) << 2;
+            batchAcc[batchQ]++;
+            batchAcc[batchQ + 1] += logR;
+            batchAcc[batchQ + 2] += logR2;
           }
           if (weight > 0) {
             let bin = (logR * HISTOGRAM_BINS_PER_NAT) | 0;
@@ -259,7 +258,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
           p = q;
         }
         // p is now the last member: its forward return is censored.
-        batchSumLogCount[p >>> batchShift] += logc;
+        batchAcc[((p >>> batchShift) << 2) + 3] += logc;
         if ((p & sampleMask) === 0) paths[(p >>> strideShift) * maxN + offset] = -(N - n - p + 1);
         forwardObserved += c - 1;
         observed += used;
@@ -281,6 +280,16 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
       }
     }
     if (!droppedFromActive && n >= 2) removedAlive--; // the dropped position had become unique before
+    const batchObserved = new Float64Array(batchCount);
+    const batchSumLog = new Float64Array(batchCount);
+    const batchSumLog2 = new Float64Array(batchCount);
+    const batchSumLogCount = new Float64Array(batchCount);
+    for (let b = 0; b < batchCount; b++) {
+      batchObserved[b] = batchAcc[4 * b];
+      batchSumLog[b] = batchAcc[4 * b + 1];
+      batchSumLog2[b] = batchAcc[4 * b + 2];
+      batchSumLogCount[b] = batchAcc[4 * b + 3];
+    }
     const singletons = removedAlive + newSingletons;
     removedAlive += newSingletons;
     const level: LevelStats = {
