@@ -1,11 +1,8 @@
 import { expose, releaseProxy } from 'comlink';
 import { sha256 } from '@noble/hashes/sha2.js';
 import { bytesToHex } from '@noble/hashes/utils.js';
-import { analyzeSequence } from '../src/core/analyze';
-import { entropyFromNats, varianceFromNats } from '../src/core/estimate/units';
-import type { AnalysisResult, AnalysisSettings } from '../src/core/result/analysisResult';
-import { createReader, readAll } from '../src/core/sequence/sequenceReader';
-import type { ReaderOptions, ReadResult } from '../src/core/sequence/sequenceReader';
+import { analyzeSequence, createReader, readAll } from '../src/core';
+import type { AnalysisResult, AnalysisSettings, ReadResult, ReaderOptions } from '../src/core';
 import { demoScenario } from './demoScenarios';
 
 /** Reading reports bytes read; the scan reports each finished block length n and the positions still active. */
@@ -67,12 +64,7 @@ const api = {
       const { entropyRate, sigma2 } = demo.source.facts;
       return analyzeSequence(demo.source.generate(length, seed), { name: demo.title, sha256: null, format: 'generated' }, settings, {
         onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
-        // In the output unit, like every other entropy in the result.
-        reference: {
-          source: demo.title,
-          entropyRate: entropyRate === null ? null : entropyFromNats(entropyRate, settings.unit),
-          sigma2: sigma2 === null ? null : varianceFromNats(sigma2, settings.unit),
-        },
+        reference: { source: demo.title, entropyRateNats: entropyRate, sigma2Nats: sigma2 },
       });
     } finally {
       release(onProgress);

@@ -1,6 +1,5 @@
-import type { Sequence } from '../src/core/sequence/sequence';
-import type { ReferenceSource } from '../src/core/sources/referenceSource';
-import { markovSource } from '../src/core/sources/markovSource';
+import { markovSource } from '../src/core';
+import type { ReferenceSource, Sequence } from '../src/core';
 
 /**
  * Invented demo scenarios: stories of our own told with generated data. Nothing here is a

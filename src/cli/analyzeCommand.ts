@@ -1,12 +1,13 @@
-import { writeFile } from 'node:fs/promises';
 import { basename } from 'node:path';
-import { analyzeSequence } from '../core/analyze';
+import { analyzeSequence, type ReferenceFacts } from '../core/analyze';
 import { parseSourceSpec } from '../core/sources/catalog';
+import type { AnalysisSettings } from '../core/result/analysisResult';
 import type { Sequence } from '../core/sequence/sequence';
-import type { AnalysisResult } from '../core/result/analysisResult';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
+import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
+import type { CliIo } from './runCli';
 import { summaryText } from './summaryText';
 import { UsageError } from './usageError';
 
@@ -15,11 +16,11 @@ type Values = Record<string, string | boolean | undefined>;
 interface Loaded {
   sequence: Sequence;
   input: { name: string; sha256: string | null; format: string };
-  reference: AnalysisResult['reference'];
+  reference: ReferenceFacts | undefined;
   readSeconds: number;
 }
 
-async function load(file: string | undefined, values: Values): Promise<Loaded> {
+async function load(file: string | undefined, values: Values, io: CliIo): Promise<Loaded> {
   const t0 = performance.now();
   if (values.source !== undefined) {
     if (file !== undefined) throw new UsageError('give either a FILE or --source, not both');
@@ -31,26 +32,38 @@ async function load(file: string | undefined, values: Values): Promise<Loaded> {
     return {
       sequence,
       input: { name: `${source.id} (length ${length}, seed ${seed})`, sha256: null, format: 'generated' },
-      reference: { source: source.id, entropyRate: source.facts.entropyRate, sigma2: source.facts.sigma2 },
+      reference: { source: source.id, entropyRateNats: source.facts.entropyRate, sigma2Nats: source.facts.sigma2 },
       readSeconds: (performance.now() - t0) / 1000,
     };
   }
   if (file === undefined) throw new UsageError('analyze needs a FILE (or --source SPEC --length L)');
   const options = readerOptionsFrom(values, values.format === undefined ? await guessFileFormat(file) : 'chars');
   const read = await readInputFile(file, options);
-  for (const w of read.warnings) process.stderr.write(`returnrate: note: ${w.message}\n`);
+  for (const w of read.warnings) io.stderr.write(`returnrate: note: ${w.message}\n`);
   return {
     sequence: read.sequence,
     input: { name: basename(file), sha256: read.sha256, format: options.format },
-    reference: null,
+    reference: undefined,
     readSeconds: (performance.now() - t0) / 1000,
   };
 }
 
+/**
+ * The largest block length fitted to a sequence of N symbols: without --max-n the default is cut
+ * to N - 1 so that a short file still runs; a --max-n the data cannot take is refused in the
+ * option's own name (the core's message speaks of maxN). N < 2 is left to the core's message.
+ */
+function fitMaxN(settings: AnalysisSettings, N: number, given: boolean): AnalysisSettings {
+  if (N < 2 || settings.maxN <= N - 1) return settings;
+  if (given) throw new RangeError(`--max-n ${settings.maxN} is too large for a sequence of ${N} symbols: block lengths go up to N - 1 = ${N - 1}`);
+  return { ...settings, maxN: N - 1 };
+}
+
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
-export async function analyzeCommand(file: string | undefined, values: Values): Promise<void> {
-  const settings = settingsFrom(values);
-  const loaded = await load(file, values);
+export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
+  const options = settingsFrom(values);
+  const loaded = await load(file, values, io);
+  const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;
@@ -60,15 +73,16 @@ export async function analyzeCommand(file: string | undefined, values: Values): 
       positionLevels += active;
       lastActive = active;
     },
-    reference: loaded.reference,
+    ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
   });
   const analysisSeconds = (performance.now() - t1) / 1000;
   const json = values.json === undefined ? undefined : String(values.json);
-  if (json === '-') process.stdout.write(JSON.stringify(result, null, 2) + '\n');
-  else {
-    if (json !== undefined) await writeFile(json, JSON.stringify(result, null, 2) + '\n');
-    if (values.quiet !== true) process.stdout.write(summaryText(result, { table: values['no-table'] !== true }));
+  if (json !== undefined) {
+    const out = openOutput(json, io.stdout);
+    await out.write(JSON.stringify(result, null, 2) + '\n');
+    await out.close();
   }
+  if (json !== '-' && values.quiet !== true) io.stdout.write(summaryText(result, { table: values['no-table'] !== true }));
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {
@@ -78,6 +92,6 @@ export async function analyzeCommand(file: string | undefined, values: Values): 
       positionLevels: positionLevels - lastActive,
       peakRssBytes: process.resourceUsage().maxRSS * 1024,
     };
-    process.stderr.write(`timing ${JSON.stringify(timing)}\n`);
+    io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
   }
 }

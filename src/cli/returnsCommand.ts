@@ -1,8 +1,9 @@
-import { createWriteStream } from 'node:fs';
 import { scanReturns } from '../core/returns/scanReturns';
 import { guessFileFormat } from './guessFileFormat';
 import { isPositiveInteger, numberOption, readerOptionsFrom } from './options';
+import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
+import type { CliIo } from './runCli';
 import { UsageError } from './usageError';
 
 type Values = Record<string, string | boolean | undefined>;
@@ -12,7 +13,7 @@ const FLUSH_CHARS = 1 << 20;
  * `returnrate returns FILE --n N`: CSV `position,return_time,censored` for every position (0-based).
  * A censored row holds the lower bound N - n - i and censored = 1.
  */
-export async function returnsCommand(file: string | undefined, values: Values): Promise<void> {
+export async function returnsCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   if (file === undefined) throw new UsageError('returns needs a FILE');
   const n = numberOption(values, 'n', isPositiveInteger, 'a whole number of at least 1');
   if (n === undefined) throw new UsageError('returns needs --n N, the block length');
@@ -22,18 +23,16 @@ export async function returnsCommand(file: string | undefined, values: Values): 
   if (n > N) throw new RangeError(`--n ${n} is longer than the sequence (${N} symbols)`);
   const scan = scanReturns(sequence.symbols, sequence.alphabet.length, { maxN: n, captureLevel: n, batchTarget: 1, sampleTarget: 1 });
   const captured = scan.captured!;
-  const outPath = values.out === undefined ? '-' : String(values.out);
-  const out = outPath === '-' ? process.stdout : createWriteStream(outPath);
+  const out = openOutput(values.out === undefined ? '-' : String(values.out), io.stdout);
   let buffer = 'position,return_time,censored\n';
   for (let i = 0; i < captured.length; i++) {
     const r = captured[i]!;
     buffer += r > 0 ? `${i},${r},0\n` : `${i},${-r - 1},1\n`;
     if (buffer.length >= FLUSH_CHARS) {
-      const chunk = buffer;
+      await out.write(buffer);
       buffer = '';
-      if (!out.write(chunk)) await new Promise<void>((resolve) => out.once('drain', () => resolve()));
     }
   }
-  out.write(buffer);
-  if (out !== process.stdout) await new Promise<void>((resolve) => out.end(() => resolve()));
+  await out.write(buffer);
+  await out.close();
 }

@@ -24,15 +24,17 @@ export function summaryText(result: AnalysisResult, options: { table: boolean })
   }
   if (result.reference) {
     const r = result.reference;
-    lines.push(`reference source ${r.source}: exact h = ${fmt(r.entropyRate, 6)} nat, sigma^2 = ${fmt(r.sigma2, 6)}`);
+    lines.push(`reference source ${r.source}: exact h = ${fmt(r.entropyRate, 6)} ${unit}, sigma^2 = ${fmt(r.sigma2, 6)} ${sigma2.unit}`);
   }
   lines.push('');
   lines.push('other estimators');
-  for (const [key, alt] of Object.entries(entropy.alternatives)) {
-    lines.push(`  ${alt.label.padEnd(36)} ${fmt(alt.estimate).padStart(9)} ${interval(alt.ci95).padEnd(22)} ${key === entropy.method ? '(headline)' : ''}`.trimEnd());
-  }
-  for (const alt of Object.values(sigma2.alternatives)) {
-    lines.push(`  ${`sigma^2: ${alt.label}`.padEnd(36)} ${fmt(alt.estimate).padStart(9)} ${interval(alt.ci95)}`.trimEnd());
+  const rows = [
+    ...Object.entries(entropy.alternatives).map(([key, alt]) => ({ label: `h: ${alt.label}`, alt, headline: key === entropy.method })),
+    ...Object.values(sigma2.alternatives).map((alt) => ({ label: `sigma^2: ${alt.label}`, alt, headline: false })),
+  ];
+  const width = Math.max(...rows.map((r) => r.label.length));
+  for (const { label, alt, headline } of rows) {
+    lines.push(`  ${label.padEnd(width)}  ${fmt(alt.estimate).padStart(9)} ${interval(alt.ci95).padEnd(20)} ${headline ? '(headline)' : ''}`.trimEnd());
   }
   if (options.table) {
     lines.push('');

@@ -25,6 +25,8 @@ import { returnSlope } from './estimate/returnSlope';
 import { trustedRange, type LowerRule } from './estimate/trustedRange';
 import {
   entropyFactor,
+  entropyFromNats,
+  varianceFromNats,
   perSecond,
   perSecondUnitLabel,
   rateUnitLabel,
@@ -38,8 +40,16 @@ export interface AnalysisHooks {
   readonly onLevel?: (n: number, active: number) => void;
   /** Polled during the scan; returning true abandons it with ScanCancelled. */
   readonly shouldStop?: () => boolean;
-  /** Facts of the reference source the sequence was generated from, copied into the result. */
-  readonly reference?: AnalysisResult['reference'];
+  /** Facts of the reference source the sequence was generated from, in nats; the result states them
+   * in the output unit. */
+  readonly reference?: ReferenceFacts;
+}
+
+/** A reference source's exact values in nats (per symbol, and nats^2 for sigma^2). */
+export interface ReferenceFacts {
+  readonly source: string;
+  readonly entropyRateNats: number | null;
+  readonly sigma2Nats: number | null;
 }
 
 /** Method knobs for studies and tests; the defaults are the documented rules. */
@@ -48,7 +58,7 @@ export interface AnalysisMethodOptions {
   readonly lowerRule?: LowerRule;
   /** Coarse batches for every interval; default INTERVAL_BATCHES (32). */
   readonly intervalBatches?: number;
-  readonly reference?: AnalysisResult['reference'];
+  readonly reference?: ReferenceFacts;
 }
 
 /** Fewer symbols than this get a 'short-sequence' warning. */
@@ -154,7 +164,17 @@ export function analyzeFromScan(
   const plugin = pluginConditional(levels, planAt, confidence);
   const match = matchLength(scan);
 
-  const choice = chooseEntropyHeadline({ returnSlope: slope, pluginConditional: plugin, returnMean: mean, matchLength: match }, rateUnitLabel(unit));
+  // sigma^2: information batch means (headline) and variance growth of log R_n (alternative).
+  const info = informationVariance(levels, planAt, confidence, plugin.converged ? plugin.k : null);
+  const growth = varianceGrowth(moments, confidence);
+  const f2 = f * f;
+  const nTop = range.hi > 0 ? range.hi : 1;
+  const upper = info.interval === null ? null : info.interval[1];
+  const negligible = upper !== null && nTop * upper < NEGLIGIBLE_SHARE * LOG_EXPONENTIAL_VARIANCE;
+  const choice = chooseEntropyHeadline(
+    { returnSlope: slope, pluginConditional: plugin, returnMean: mean, matchLength: match, sigma2Negligible: negligible },
+    rateUnitLabel(unit),
+  );
   warnings.push(...choice.warnings);
   const byMethod: Record<Exclude<EntropyMethod, 'none'>, EstimatorResult> = {
     'return-slope': slope,
@@ -168,13 +188,6 @@ export function analyzeFromScan(
   const ci: readonly [number, number] = interval === null ? [Number.NaN, Number.NaN] : [interval[0] * f, interval[1] * f];
   const headlineInterval = { estimate: estimate * f, ci95: ci };
 
-  // sigma^2: information batch means (headline) and variance growth of log R_n (alternative).
-  const info = informationVariance(levels, planAt, confidence, plugin.converged ? plugin.k : null);
-  const growth = varianceGrowth(moments, confidence);
-  const f2 = f * f;
-  const nTop = range.hi > 0 ? range.hi : 1;
-  const upper = info.interval === null ? null : info.interval[1];
-  const negligible = upper !== null && nTop * upper < NEGLIGIBLE_SHARE * LOG_EXPONENTIAL_VARIANCE;
   const law = negligible && range.hi > 0 ? exponentialLaw(rows[range.hi - 1]) : null;
   if (negligible) {
     warnings.push({
@@ -188,7 +201,15 @@ export function analyzeFromScan(
 
   pushDataWarnings(scan, range.hi, settings.maxN, plugin.wellSampled, info.k, match.truncated, rangePlan?.count ?? null, warnings);
 
-  const reference = method.reference ?? null;
+  const facts = method.reference;
+  const reference =
+    facts === undefined
+      ? null
+      : {
+          source: facts.source,
+          entropyRate: facts.entropyRateNats === null ? null : entropyFromNats(facts.entropyRateNats, settings.unit),
+          sigma2: facts.sigma2Nats === null ? null : varianceFromNats(facts.sigma2Nats, settings.unit),
+        };
   return {
     schema: ANALYSIS_SCHEMA,
     program: { name: 'returnrate', version: PROGRAM_VERSION },

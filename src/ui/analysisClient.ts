@@ -1,6 +1,6 @@
 import { proxy, transfer, wrap } from 'comlink';
 import type { Remote } from 'comlink';
-import type { AnalysisResult, AnalysisSettings } from '../core/result/analysisResult';
+import type { AnalysisResult, AnalysisSettings } from '../core';
 import type { AnalysisApi, AnalysisProgress, FileReadOptions } from '../../workers/analysis.worker';
 
 export type { AnalysisProgress, FileReadOptions };

@@ -1,9 +1,9 @@
-import type { AnalysisResult, AnalysisSettings } from '../core/result/analysisResult';
+import { SNIFF_BYTES } from '../core';
+import type { AnalysisResult, AnalysisSettings } from '../core';
 import type { AnalysisClient, AnalysisProgress } from './analysisClient';
 import { createAnalysisClient } from './analysisClient';
 import { DEFAULT_DEMO } from './store/inputSlice';
 import { readerOptionsFor } from './view/inputOptions';
-import { SNIFF_BYTES } from '../core/sequence/guessFormat';
 import { appStore, bindActions } from './store/store';
 import type { StoreHandle } from './store/store';
 

@@ -126,12 +126,16 @@ describe('analyzeSequence', () => {
     expect(r.reference).toBeNull();
   });
 
-  it('stops with ScanCancelled when asked, and copies reference facts when given', () => {
-    // source: API contract
+  it('stops with ScanCancelled when asked, and states reference facts in the output unit', () => {
+    // source: API contract; log2(e) = 1/ln 2 converts nats to bits (common practice, no source)
     const seq = sequenceOf(randomSymbols(3000, 2, 5), 2);
     expect(() => analyzeSequence(seq, { name: 'x', sha256: null, format: 'generated' }, settings, { shouldStop: () => true })).toThrow(ScanCancelled);
-    const reference = { source: 'coin', entropyRate: Math.LN2, sigma2: 0 };
-    expect(analyzeSequence(seq, { name: 'x', sha256: null, format: 'generated' }, settings, { reference }).reference).toEqual(reference);
+    const reference = { source: 'chain', entropyRateNats: 0.5, sigma2Nats: 0.25 };
+    const input = { name: 'x', sha256: null, format: 'generated' };
+    expect(analyzeSequence(seq, input, settings, { reference }).reference).toEqual({ source: 'chain', entropyRate: 0.5, sigma2: 0.25 });
+    const inBits = analyzeSequence(seq, input, { ...settings, unit: 'bit' }, { reference }).reference!;
+    expect(inBits.entropyRate).toBeCloseTo(0.5 / Math.LN2, 12);
+    expect(inBits.sigma2).toBeCloseTo(0.25 / Math.LN2 ** 2, 12);
   });
 
   it('rejects bad settings before scanning', () => {

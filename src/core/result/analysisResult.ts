@@ -147,7 +147,7 @@ export interface AnalysisResult {
   /** Sampled forward paths: positions and, per position, log R_n for n = 1..maxN (null = censored
    * or beyond the end). */
   readonly paths: { readonly positions: readonly number[]; readonly logReturn: readonly (readonly (number | null)[])[] };
-  /** Reference source facts when the input was generated from one. */
+  /** Reference source facts when the input was generated from one, in the output unit. */
   readonly reference: { readonly source: string; readonly entropyRate: number | null; readonly sigma2: number | null } | null;
   readonly warnings: readonly AnalysisWarning[];
   /** The block lengths the return-time estimators trust, and why. */

@@ -22,7 +22,7 @@ export function checkProbabilities(probabilities: readonly number[]): Float64Arr
   let sum = 0;
   for (let k = 0; k < probabilities.length; k++) {
     const p = probabilities[k];
-    if (!Number.isFinite(p) || p < 0) throw new RangeError(`probability ${k} is ${p}`);
+    if (!Number.isFinite(p) || p < 0) throw new RangeError(`probability ${k + 1} is ${p}`);
     sum += p;
   }
   if (!(Math.abs(sum - 1) <= SUM_TOLERANCE)) throw new RangeError(`probabilities sum to ${sum}, not 1`);

@@ -114,7 +114,7 @@ export function matrixFromRows(rows: readonly (readonly number[])[], columns: nu
   for (let i = 0; i < rows.length; i++) {
     const row = rows[i];
     if (row.length !== columns) {
-      throw new RangeError(`row ${i} has ${row.length} entries, expected ${columns}`);
+      throw new RangeError(`row ${i + 1} has ${row.length} entries, expected ${columns}`);
     }
     for (let j = 0; j < columns; j++) out[i * columns + j] = row[j];
   }

@@ -39,14 +39,14 @@ export function checkTransitionMatrix(matrix: TransitionMatrix): CheckedChain {
   const transitions = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
     const row = matrix[i];
-    if (row.length !== n) throw new RangeError(`row ${i} has ${row.length} entries, expected ${n}`);
+    if (row.length !== n) throw new RangeError(`row ${i + 1} has ${row.length} entries, expected ${n}`);
     let sum = 0;
     for (let j = 0; j < n; j++) {
       const p = row[j];
       if (!Number.isFinite(p) || p < 0) throw new RangeError(`entry (${i}, ${j}) is ${p}, not a probability`);
       sum += p;
     }
-    if (!(Math.abs(sum - 1) <= ROW_SUM_TOLERANCE)) throw new RangeError(`row ${i} sums to ${sum}, not 1`);
+    if (!(Math.abs(sum - 1) <= ROW_SUM_TOLERANCE)) throw new RangeError(`row ${i + 1} sums to ${sum}, not 1`);
     for (let j = 0; j < n; j++) transitions[i * n + j] = row[j] / sum;
   }
   const structure = chainStructure(transitions, n);
@@ -208,7 +208,7 @@ export function markovFunctionalMoments(matrix: TransitionMatrix, functional: Tr
   const f = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
     const row = functional[i];
-    if (row.length !== n) throw new RangeError(`functional row ${i} has ${row.length} entries, expected ${n}`);
+    if (row.length !== n) throw new RangeError(`functional row ${i + 1} has ${row.length} entries, expected ${n}`);
     for (let j = 0; j < n; j++) {
       if (chain.transitions[i * n + j] > 0 && !Number.isFinite(row[j])) {
         throw new RangeError(`functional entry (${i}, ${j}) is ${row[j]}`);

@@ -59,12 +59,12 @@ export function liftMarkovOrder(matrix: ContextMatrix, order = 1): LiftedChain {
   const rows = new Float64Array(states * a);
   for (let r = 0; r < states; r++) {
     const row = matrix[r];
-    if (row.length !== a) throw new RangeError(`row ${r} has ${row.length} entries, expected ${a}`);
+    if (row.length !== a) throw new RangeError(`row ${r + 1} has ${row.length} entries, expected ${a}`);
     let law: Float64Array;
     try {
       law = checkProbabilities(row);
     } catch (e) {
-      throw new RangeError(`row ${r}: ${(e as Error).message}`, { cause: e });
+      throw new RangeError(`row ${r + 1}: ${(e as Error).message}`, { cause: e });
     }
     rows.set(law, r * a);
   }

@@ -21,7 +21,7 @@ function checkAdjacency(adjacency: readonly (readonly number[])[]): Float64Array
   const a = new Float64Array(n * n);
   for (let i = 0; i < n; i++) {
     const row = adjacency[i];
-    if (row.length !== n) throw new RangeError(`adjacency row ${i} has ${row.length} entries, expected ${n}`);
+    if (row.length !== n) throw new RangeError(`adjacency row ${i + 1} has ${row.length} entries, expected ${n}`);
     for (let j = 0; j < n; j++) {
       const x = row[j];
       if (x !== 0 && x !== 1) throw new RangeError(`adjacency entry (${i}, ${j}) is ${x}, not 0 or 1`);

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import type { AnalysisResult } from '../../core/result/analysisResult';
+import type { AnalysisResult } from '../../core';
 import { useAppState } from '../store/store';
 import { lengthTableView } from '../view/lengthTableView';
 

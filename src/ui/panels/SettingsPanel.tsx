@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { EntropyUnit } from '../../core/result/analysisResult';
+import type { EntropyUnit } from '../../core';
 import { resetSettings, updateSettings, useAppState } from '../store/store';
 import { CONFIDENCE_CHOICES, MAX_N_RANGE, parseMaxN } from '../view/settingsView';
 

@@ -1,4 +1,4 @@
-import type { InputFormat } from '../../core/sequence/sequenceReader';
+import type { InputFormat } from '../../core';
 import type { StoreHandle } from './store';
 
 /** 'auto' picks the reader from the file name (see guessFormat). */

@@ -1,5 +1,5 @@
-import { ANALYSIS_SCHEMA } from '../../core/result/analysisResult';
-import type { AnalysisResult } from '../../core/result/analysisResult';
+import { ANALYSIS_SCHEMA } from '../../core';
+import type { AnalysisResult } from '../../core';
 import type { StoreHandle } from './store';
 
 export interface ResultState {

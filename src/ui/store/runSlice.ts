@@ -1,4 +1,4 @@
-import type { AnalysisResult } from '../../core/result/analysisResult';
+import type { AnalysisResult } from '../../core';
 import type { AnalysisProgress } from '../analysisClient';
 import type { StoreHandle } from './store';
 

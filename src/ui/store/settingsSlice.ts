@@ -1,5 +1,5 @@
-import { DEFAULT_SETTINGS } from '../../core/result/analysisResult';
-import type { AnalysisSettings } from '../../core/result/analysisResult';
+import { DEFAULT_SETTINGS } from '../../core';
+import type { AnalysisSettings } from '../../core';
 import type { StoreHandle } from './store';
 
 export interface SettingsState {

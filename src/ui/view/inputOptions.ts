@@ -1,5 +1,5 @@
-import type { ReaderOptions } from '../../core/sequence/sequenceReader';
-import { guessFormat } from '../../core/sequence/guessFormat';
+import { guessFormat } from '../../core';
+import type { ReaderOptions } from '../../core';
 import { DEMO_LENGTH_RANGE } from '../store/inputSlice';
 import type { ChosenInput, FormatChoice } from '../store/inputSlice';
 import { formatBytes, formatCount } from './format';

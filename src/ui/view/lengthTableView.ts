@@ -1,4 +1,4 @@
-import type { AnalysisResult } from '../../core/result/analysisResult';
+import type { AnalysisResult } from '../../core';
 import { DEFAULT_DECIMALS, formatCount, formatFixed, formatPercent } from './format';
 
 export interface LengthTableRow {

@@ -1,4 +1,4 @@
-import type { AlternativeEstimate, AnalysisResult } from '../../core/result/analysisResult';
+import type { AlternativeEstimate, AnalysisResult } from '../../core';
 import { decimalsForInterval, DEFAULT_DECIMALS, formatCount, formatFixed, prettyUnit } from './format';
 
 export interface IntervalText {

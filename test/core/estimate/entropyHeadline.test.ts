@@ -36,6 +36,18 @@ describe('chooseEntropyHeadline', () => {
     expect(c.reason).toContain('plateau at k = 4');
   });
 
+  it('takes the return slope over a converged plug-in when sigma^2 is negligible', () => {
+    // source: the stated rule (entropyHeadline.ts): telescoping information sums void the plug-in's batch-means error
+    const c = chooseEntropyHeadline(
+      candidates({ returnSlope: est(0.481, 0.002), pluginConditional: plugin(0.4812, true), sigma2Negligible: true }),
+      'nat/symbol',
+    );
+    expect(c.method).toBe('return-slope');
+    expect(c.reason).toContain('sigma^2 is negligible');
+    const withoutSlope = chooseEntropyHeadline(candidates({ pluginConditional: plugin(0.4812, true), sigma2Negligible: true }), 'nat/symbol');
+    expect(withoutSlope.method).toBe('plugin-conditional');
+  });
+
   it('warns when a return slope disagrees with a converged plug-in by more than three standard errors', () => {
     // source: the stated rule: |0.68 - 0.693| = 0.013 > 3 * hypot(0.002, 0.001) = 0.0067
     const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.68, 0.002), pluginConditional: plugin(0.693, true) }), 'nat/symbol');

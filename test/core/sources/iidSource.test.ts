@@ -53,7 +53,7 @@ describe('iidSource', () => {
 
   it('rejects bad laws and bad lengths with RangeError naming the problem', () => {
     expect(() => iidSource([])).toThrow(/at least one/);
-    expect(() => iidSource([0.5, -0.1, 0.6])).toThrow(/probability 1 is -0.1/);
+    expect(() => iidSource([0.5, -0.1, 0.6])).toThrow(/probability 2 is -0.1/);
     expect(() => iidSource([0.5, 0.4])).toThrow(/sum to 0.9/);
     expect(() => iidSource([0.5, 0.5]).generate(-1, 0)).toThrow(/length/);
     expect(() => iidSource([0.5, 0.5]).generate(2.5, 0)).toThrow(RangeError);

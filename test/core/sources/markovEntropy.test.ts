@@ -10,7 +10,7 @@ import {
 describe('checkTransitionMatrix', () => {
   it('rejects negative entries, rows not summing to 1, non-square shapes and reducible chains', () => {
     expect(() => checkTransitionMatrix([[1.1, -0.1], [0.5, 0.5]])).toThrow(/entry \(0, 1\) is -0.1/);
-    expect(() => checkTransitionMatrix([[0.5, 0.4], [0.5, 0.5]])).toThrow(/row 0 sums to 0.9/);
+    expect(() => checkTransitionMatrix([[0.5, 0.4], [0.5, 0.5]])).toThrow(/row 1 sums to 0.9/);
     expect(() => checkTransitionMatrix([[0.5, 0.5, 0], [0.5, 0.5, 0]])).toThrow(RangeError);
     expect(() => checkTransitionMatrix([[Number.NaN, 1], [0.5, 0.5]])).toThrow(/NaN/);
     expect(() => checkTransitionMatrix([])).toThrow(/no rows/);

@@ -127,9 +127,9 @@ describe('markovSource', () => {
   it('rejects bad orders, shapes and rows with RangeError naming them', () => {
     expect(() => markovSource(TWO_STATE, 0)).toThrow(/order/);
     expect(() => markovSource(TWO_STATE, 2)).toThrow(/needs 4 rows, got 2/);
-    expect(() => markovSource([[0.9, 0.1], [0.4]])).toThrow(/row 1 has 1 entries/);
-    expect(() => markovSource([[0.9, 0.1], [0.4, 0.5]])).toThrow(/row 1: probabilities sum to 0.9/);
-    expect(() => markovSource([[0.9, 0.1], [-0.4, 1.4]])).toThrow(/row 1: probability 0 is -0.4/);
+    expect(() => markovSource([[0.9, 0.1], [0.4]])).toThrow(/row 2 has 1 entries/);
+    expect(() => markovSource([[0.9, 0.1], [0.4, 0.5]])).toThrow(/row 2: probabilities sum to 0.9/);
+    expect(() => markovSource([[0.9, 0.1], [-0.4, 1.4]])).toThrow(/row 2: probability 1 is -0.4/);
     expect(() => markovSource([[1, 0], [0, 1]])).toThrow(/reducible/);
     expect(() => markovSource(Array.from({ length: 2 ** 11 }, () => [0.5, 0.5]), 11)).toThrow(/more than 1024/);
   });

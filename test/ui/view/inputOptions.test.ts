@@ -9,11 +9,14 @@ describe('inputOptions', () => {
     expect(guessFormat('dump.bin', '')).toBe('bytes');
     expect(guessFormat('wind.txt', 'N NE E SE\n')).toBe('tokens');
     expect(guessFormat('coin.txt', 'a b a a\n')).toBe('chars');
-    expect(guessFormat('coin.txt', '0110100\n')).toBe('tokens');
+    expect(guessFormat('coin.txt', '0110100\n1001011\n')).toBe('chars');
+    expect(guessFormat('counts.txt', '12\n7\n33\n')).toBe('tokens');
+    expect(guessFormat('codes.txt', 'NE\nSW\nNW\n')).toBe('tokens');
+    expect(guessFormat('bits.txt', '0\n1\n1\n')).toBe('chars');
   });
 
-  it('guessFormat ignores the last field, which the sniff window may have cut', () => {
-    expect(guessFormat('x', 'a b cdef')).toBe('chars');
+  it('guessFormat ignores the last line without its line break, which the sniff window may have cut', () => {
+    expect(guessFormat('x', 'a b c\na b cdef')).toBe('chars');
   });
 
   it('parseColumn reads digits as a 0-based index, other text as a header name, blank as default', () => {

@@ -1,0 +1,50 @@
+// The public surface of the numeric core, for hosts (command line, workers, workbench) only. Code
+// inside src/core imports concrete files, never this barrel.
+
+// Sequences and readers
+export type { SymbolArray, Sequence } from './sequence/sequence';
+export { allocateSymbols } from './sequence/sequence';
+export { ReadError } from './sequence/readError';
+export type { ReadErrorCode, InputPosition } from './sequence/readError';
+export { createReader, readAll } from './sequence/sequenceReader';
+export type { InputFormat, ReaderOptions, ReadResult, SequenceReader, FastaRecord, ReadWarning } from './sequence/sequenceReader';
+export { guessFormat, SNIFF_BYTES } from './sequence/guessFormat';
+
+// The return-time engine
+export { scanReturns, ScanCancelled } from './returns/scanReturns';
+export type { ScanOptions } from './returns/scanReturns';
+export type { LevelStats, ReturnScan, SampledPaths } from './returns/levelStats';
+export { HISTOGRAM_BINS_PER_NAT } from './returns/levelStats';
+
+// The analysis and its result
+export { analyzeSequence, analyzeFromScan, validateSettings } from './analyze';
+export type { AnalysisHooks, ReferenceFacts, AnalysisMethodOptions } from './analyze';
+export { ANALYSIS_SCHEMA, DEFAULT_SETTINGS } from './result/analysisResult';
+export type {
+  AnalysisResult,
+  AnalysisSettings,
+  AnalysisWarning,
+  AlternativeEstimate,
+  EntropyEstimate,
+  EntropyUnit,
+  ExponentialLawSummary,
+  InputSummary,
+  Interval,
+  LengthRow,
+  Sigma2Estimate,
+} from './result/analysisResult';
+export { PROGRAM_VERSION } from './result/version';
+export { lengthsCsv } from './result/lengthsCsv';
+export { entropyFromNats, varianceFromNats, rateUnitLabel, varianceUnitLabel } from './estimate/units';
+export { EULER_GAMMA, LOG_EXPONENTIAL_VARIANCE } from './estimate/exponentialLaw';
+
+// Reference sources
+export type { ReferenceSource, SourceFacts, DetailedSample } from './sources/referenceSource';
+export { sourceCatalog, parseSourceSpec, SOURCE_SPEC_FORMS } from './sources/catalog';
+export { iidSource } from './sources/iidSource';
+export { fairCoinSource } from './sources/fairCoinSource';
+export { markovSource } from './sources/markovSource';
+export { parrySource, goldenMeanSource } from './sources/parrySource';
+export { continuedFractionSource } from './sources/continuedFractionSource';
+export { renewalSource } from './sources/renewalSource';
+export { markovEntropyRate, markovVarentropyRate, stationaryDistribution } from './sources/markovEntropy';
