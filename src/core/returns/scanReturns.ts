@@ -1,8 +1,7 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
-import { HISTOGRAM_BINS_PER_NAT, type LevelStats, type ReturnScan } from './levelStats';
+import { HISTOGRAM_BINS_PER_NAT, type LevelStats, type ReturnScan, type SampledPaths } from './levelStats';
 import { logOfPositive } from './logOfPositive';
-import { denseLevelCount, denseState, orderFromDense, scanDenseLevel } from './denseLevels';
-import { assembleLevel, completePaths, matchWindowFor, scanLayoutFor, uniqueLevel, type LevelSums } from './scanLayout';
+import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
 
 export interface ScanOptions {
   /** Largest block length, 1 <= maxN <= N. */
@@ -55,12 +54,19 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) {
     throw new RangeError(`alphabetSize must be a positive integer; got ${alphabetSize}`);
   }
-  const matchWindowOption = options.matchWindow ?? matchWindowFor(N);
-  if (!Number.isInteger(matchWindowOption) || matchWindowOption < 1) {
-    throw new RangeError(`matchWindow must be a positive integer; got ${matchWindowOption}`);
+  const batchLength = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
+  const batchShift = Math.log2(batchLength);
+  const batchCount = Math.ceil(N / batchLength);
+  const stride = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
+  const strideShift = Math.log2(stride);
+  const sampleMask = stride - 1;
+  const sampleCount = Math.ceil(N / stride);
+  const matchWindow = options.matchWindow ?? matchWindowFor(N);
+  if (!Number.isInteger(matchWindow) || matchWindow < 1) {
+    throw new RangeError(`matchWindow must be a positive integer; got ${matchWindow}`);
   }
-  const layout = scanLayoutFor(N, maxN, options.batchTarget ?? 256, options.sampleTarget ?? 256, matchWindowOption);
-  const { batchShift, batchCount, sampleMask, strideShift, matchWindow, matchEnd, bins } = layout;
+  const matchEnd = N - maxN;
+  const bins = histogramBinCount(N);
   const maxBin = bins - 1;
   const shouldStop = options.shouldStop;
   const captureLevel = options.captureLevel ?? 0;
@@ -73,42 +79,12 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     captured = new Int32Array(N - captureLevel + 1);
     for (let i = 0; i < captured.length; i++) captured[i] = -(N - captureLevel - i + 1);
   }
+
   // Sampled forward paths start unset (NaN) and are completed once the scan ends.
-  const paths = new Float64Array(layout.sampleCount * maxN).fill(NaN);
-  const levels: LevelStats[] = [];
-  const report = (level: LevelStats, active: number): void => {
-    levels.push(level);
-    options.onLevel?.(level, active);
-  };
+  const paths = new Float64Array(sampleCount * maxN).fill(NaN);
 
-  // The first levels by direct block ids while the tables are small (denseLevels.ts).
-  const denseLevels = denseLevelCount(alphabetSize, N, maxN);
-  let order: Int32Array;
-  let next: Int32Array;
-  let activeLength: number;
-  let removedAlive = 0; // positions whose block became unique earlier and still have an n-block
-  let n = 1;
-  if (denseLevels > 0) {
-    const state = denseState(N, alphabetSize, denseLevels);
-    for (; n <= denseLevels; n++) {
-      if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-      const level = scanDenseLevel(symbols, alphabetSize, n, state, layout, paths, n === captureLevel ? captured : null);
-      report(level, level.positions - level.singletons);
-    }
-    const last = levels[levels.length - 1];
-    order = new Int32Array(n <= maxN ? N : 0);
-    activeLength = n <= maxN ? orderFromDense(state, alphabetSize, n - 1, last.positions, order) : 0;
-    removedAlive = last.singletons;
-    next = state.ids; // no longer needed: reused as the second order buffer
-  } else {
-    order = new Int32Array(N);
-    next = new Int32Array(N);
-    for (let i = 0; i < N; i++) order[i] = i;
-    if (N > 0) order[0] = ~0;
-    activeLength = N;
-  }
-  const firstRefined = n;
-
+  let order = new Int32Array(N);
+  let next = new Int32Array(N);
   // Small alphabets: each entry carries the next `perWord` symbols of its position packed in 16 bits,
   // refreshed from the sequence once every perWord levels. This turns the random read of
   // x[p + n - 1] (the dominant cost once classes are scattered over the sequence) into a sequential
@@ -117,17 +93,21 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
   const packed = perWord > 1;
   const symbolMask = (1 << bits) - 1;
-  const refining = n <= maxN && activeLength > 0;
-  let words = new Uint16Array(packed && refining ? N : 0);
-  let nextWords = new Uint16Array(packed && refining ? N : 0);
-  const scratch = allocateSymbols(packed || !refining ? 0 : N, alphabetSize);
-  let wordBase = 0; // offset of the first symbol held in the carried words
+  let words = new Uint16Array(packed ? N : 0);
+  let nextWords = new Uint16Array(packed ? N : 0);
+  const scratch = allocateSymbols(packed ? 0 : N, alphabetSize);
+  for (let i = 0; i < N; i++) order[i] = i;
+  if (N > 0) order[0] = ~0;
+  let activeLength = N;
   // Per-symbol counts inside one class, reset through the touched list.
-  const counts = new Int32Array(refining ? alphabetSize : 0);
+  const counts = new Int32Array(alphabetSize);
   const touched = new Int32Array(Math.min(alphabetSize, N) + 1);
   const sizes = new Int32Array(Math.min(alphabetSize, N) + 1);
 
+  const levels: LevelStats[] = [];
+  let removedAlive = 0; // positions whose block became unique earlier and still have an n-block
   let sinceCheck = 0;
+  let n = 1;
   for (; n <= maxN && activeLength > 0; n++) {
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
     const offset = n - 1;
@@ -135,11 +115,8 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     const half = positions >>> 1;
     const dropPosition = N - n + 1; // its n-block would run past the end
     const capture = n === captureLevel ? captured : null;
-    if (packed && (n === firstRefined || offset - wordBase >= perWord)) {
-      wordBase = offset;
-      refreshWords(symbols, offset, bits, perWord, order, activeLength, words, nextWords);
-    }
-    const wordShift = (offset - wordBase) * bits;
+    const wordShift = (offset % perWord) * bits;
+    const refresh = wordShift === 0;
     let droppedFromActive = false;
 
     let classes = 0;
@@ -155,8 +132,11 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     let sumLogRc2 = 0;
     let matchCount = 0;
     const histogram = new Float64Array(bins);
-    // Per batch b: [observed, sum log R, sum (log R)^2, sum log count] at 4b..4b+3.
+    // Per batch b: [observed, sum log R, sum (log R)^2, sum log count] at 4b..4b+3, one cache line
+    // per batch instead of four.
     const batchAcc = new Float64Array(4 * batchCount);
+
+    if (packed && refresh) refreshWords(symbols, offset, bits, perWord, order, activeLength, words, nextWords);
 
     let out = 0;
     let s = 0;
@@ -300,9 +280,21 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
       }
     }
     if (!droppedFromActive && n >= 2) removedAlive--; // the dropped position had become unique before
+    const batchObserved = new Float64Array(batchCount);
+    const batchSumLog = new Float64Array(batchCount);
+    const batchSumLog2 = new Float64Array(batchCount);
+    const batchSumLogCount = new Float64Array(batchCount);
+    for (let b = 0; b < batchCount; b++) {
+      batchObserved[b] = batchAcc[4 * b];
+      batchSumLog[b] = batchAcc[4 * b + 1];
+      batchSumLog2[b] = batchAcc[4 * b + 2];
+      batchSumLogCount[b] = batchAcc[4 * b + 3];
+    }
     const singletons = removedAlive + newSingletons;
     removedAlive += newSingletons;
-    const sums: LevelSums = {
+    const level: LevelStats = {
+      n,
+      positions,
       distinctBlocks: classes + singletons,
       singletons,
       sumCountLogCount,
@@ -314,8 +306,14 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
       sumLog2,
       sumLogRc,
       sumLogRc2,
+      histogram,
       matchCount,
+      batchObserved,
+      batchSumLog,
+      batchSumLog2,
+      batchSumLogCount,
     };
+    levels.push(level);
     activeLength = out;
     const swap = order;
     order = next;
@@ -323,20 +321,26 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     const swapWords = words;
     words = nextWords;
     nextWords = swapWords;
-    report(assembleLevel(n, positions, sums, histogram, batchAcc), activeLength);
+    options.onLevel?.(level, activeLength);
   }
   const exhausted = n <= maxN;
-  for (; n <= maxN; n++) report(uniqueLevel(n, N - n + 1, layout), 0);
+  // Every block is unique from here on: nothing returns, nothing matches.
+  for (; n <= maxN; n++) {
+    const positions = N - n + 1;
+    const level = uniqueLevel(n, positions, bins, batchCount);
+    levels.push(level);
+    options.onLevel?.(level, 0);
+  }
   return {
     length: N,
     alphabetSize,
     maxN,
     levels,
-    batchLength: 1 << batchShift,
+    batchLength,
     batchCount,
     matchWindow,
     matchPositions: Math.max(0, matchEnd - matchWindow),
-    paths: completePaths(paths, layout),
+    paths: completePaths(paths, N, maxN, stride, sampleCount),
     exhausted,
     captured,
   };
@@ -371,4 +375,43 @@ function refreshWords(
     if (p < 0) p = ~p;
     words[k] = spare[p];
   }
+}
+
+/** A level at which every block occurs once. */
+function uniqueLevel(n: number, positions: number, bins: number, batchCount: number): LevelStats {
+  return {
+    n,
+    positions,
+    distinctBlocks: positions,
+    singletons: positions,
+    sumCountLogCount: 0,
+    forwardObserved: 0,
+    forwardSumLog: 0,
+    forwardSumLog2: 0,
+    observed: 0,
+    sumLog: 0,
+    sumLog2: 0,
+    sumLogRc: 0,
+    sumLogRc2: 0,
+    histogram: new Float64Array(bins),
+    matchCount: 0,
+    batchObserved: new Float64Array(batchCount),
+    batchSumLog: new Float64Array(batchCount),
+    batchSumLog2: new Float64Array(batchCount),
+    batchSumLogCount: new Float64Array(batchCount),
+  };
+}
+
+/** Entries never reached were unique blocks (censored) or lie past the end (0). */
+function completePaths(paths: Float64Array, N: number, maxN: number, stride: number, sampleCount: number): SampledPaths {
+  const positions = new Int32Array(sampleCount);
+  for (let s = 0; s < sampleCount; s++) {
+    const p = s * stride;
+    positions[s] = p;
+    for (let n = 1; n <= maxN; n++) {
+      const k = s * maxN + n - 1;
+      if (Number.isNaN(paths[k])) paths[k] = p <= N - n ? -(N - n - p + 1) : 0;
+    }
+  }
+  return { positions, forward: paths, maxN };
 }
