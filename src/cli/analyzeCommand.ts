@@ -1,8 +1,6 @@
 import { basename } from 'node:path';
-import { analyzeSequence, type ReferenceFacts } from '../core/analyze';
-import { parseSourceSpec } from '../core/sources/catalog';
-import type { AnalysisSettings } from '../core/result/analysisResult';
-import type { Sequence } from '../core/sequence/sequence';
+import { analyzeSequence, parseSourceSpec } from '../core';
+import type { AnalysisSettings, ReferenceFacts, Sequence } from '../core';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';

@@ -1,4 +1,4 @@
-import { parseSourceSpec, SOURCE_SPEC_FORMS } from '../core/sources/catalog';
+import { SOURCE_SPEC_FORMS, parseSourceSpec } from '../core';
 import { isPositiveInteger, numberOption } from './options';
 import type { CliIo } from './runCli';
 import { UsageError } from './usageError';

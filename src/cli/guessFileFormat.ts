@@ -1,6 +1,6 @@
 import { open } from 'node:fs/promises';
-import { guessFormat, SNIFF_BYTES } from '../core/sequence/guessFormat';
-import type { InputFormat } from '../core/sequence/sequenceReader';
+import { SNIFF_BYTES, guessFormat } from '../core';
+import type { InputFormat } from '../core';
 
 /** The reading format of a file when the user names none (the rule is core's guessFormat). */
 export async function guessFileFormat(path: string): Promise<InputFormat> {

@@ -1,5 +1,5 @@
-import type { InputFormat, ReaderOptions } from '../core/sequence/sequenceReader';
-import { DEFAULT_SETTINGS, type AnalysisSettings, type EntropyUnit } from '../core/result/analysisResult';
+import { DEFAULT_SETTINGS } from '../core';
+import type { AnalysisSettings, EntropyUnit, InputFormat, ReaderOptions } from '../core';
 import { UsageError } from './usageError';
 
 /** Options shared by the commands that read a file. */

@@ -2,9 +2,8 @@ import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { sha256 } from '@noble/hashes/sha2.js';
 import { bytesToHex } from '@noble/hashes/utils.js';
-import { ReadError } from '../core/sequence/readError';
-import { createReader } from '../core/sequence/sequenceReader';
-import type { ReaderOptions, ReadResult } from '../core/sequence/sequenceReader';
+import { ReadError, createReader } from '../core';
+import type { ReadResult, ReaderOptions } from '../core';
 
 /** Bytes per read from disk; the reader takes any chunk size, 1 MiB keeps calls few and memory flat. */
 const CHUNK_BYTES = 1 << 20;

@@ -1,4 +1,4 @@
-import { scanReturns } from '../core/returns/scanReturns';
+import { scanReturns } from '../core';
 import { guessFileFormat } from './guessFileFormat';
 import { isPositiveInteger, numberOption, readerOptionsFrom } from './options';
 import { openOutput } from './outputStream';

@@ -1,7 +1,6 @@
 import type { Writable } from 'node:stream';
 import { parseArgs } from 'node:util';
-import { PROGRAM_VERSION } from '../core/result/version';
-import { SOURCE_SPEC_FORMS } from '../core/sources/catalog';
+import { PROGRAM_VERSION, SOURCE_SPEC_FORMS } from '../core';
 import { analyzeCommand } from './analyzeCommand';
 import { describeFailure } from './failure';
 import { generateCommand } from './generateCommand';

@@ -1,4 +1,4 @@
-import type { AnalysisResult, LengthRow } from '../core/result/analysisResult';
+import type { AnalysisResult, LengthRow } from '../core';
 
 const fmt = (x: number | null | undefined, digits = 4): string => (x === null || x === undefined || !Number.isFinite(x) ? '-' : x.toFixed(digits));
 const interval = (ci: readonly [number, number] | null | undefined, digits = 4): string => (ci ? `[${fmt(ci[0], digits)}, ${fmt(ci[1], digits)}]` : '');

@@ -1,5 +1,5 @@
 import type { Writable } from 'node:stream';
-import type { Sequence } from '../core/sequence/sequence';
+import type { Sequence } from '../core';
 import { openOutput } from './outputStream';
 
 const SYMBOLS_PER_LINE = 100;

@@ -30,6 +30,12 @@ function disagree(a: EstimatorResult, b: EstimatorResult, z: number): boolean {
 
 const fmt = (x: number): string => x.toPrecision(4);
 
+/** Smallest bottom of the slope's range at which its offset drift counts as settled (see rule 2). */
+export const SETTLED_FROM = 4;
+/** Drift of E log R_n - n h per level below SETTLED_FROM, nats: fair coin, (-0.440413 + 0.185313)/3
+ * from THEORY.md section 3's exact table. */
+export const EARLY_SLOPE_DRIFT = 0.085;
+
 /**
  * Picks the least-biased entropy-rate estimate for these data, by a stated rule.
  *
@@ -43,7 +49,12 @@ const fmt = (x: number): string => x.toPrecision(4);
  * 1. if the conditional entropies have reached a plateau (last step within two standard errors of
  *    zero, k >= 2), the plug-in h_k has no visible bias of either kind and is the headline;
  * 2. otherwise the return-time slope (the default) is the headline, its bias vanishing
- *    exponentially in n while the plug-in's memory bias is seen to persist;
+ *    exponentially in n while the plug-in's memory bias is seen to persist; but when the slope's
+ *    range starts below n = SETTLED_FROM the offset is still drifting fast (for a fair coin
+ *    E log R_n - n h moves by -0.085 per level between n = 1 and 4, THEORY.md section 3 [calc]),
+ *    so the plug-in at the largest well-sampled k is preferred when its last step h_(k-1) - h_k is
+ *    smaller than that drift: for a mixing source the steps shrink geometrically, so the remaining
+ *    memory bias is of the order of the last step;
  * 3. when neither applies, the plug-in at the largest well-sampled k, then the mean return,
  *    then match lengths, each with a warning.
  * A return slope that differs from a converged plug-in by more than three standard errors of the
@@ -87,6 +98,19 @@ export function chooseEntropyHeadline(c: HeadlineCandidates, unitName: string): 
         `The conditional block entropies have reached a plateau at k = ${p.k} (${stepText}), so the plug-in estimate shows no ` +
         `memory bias and, being well sampled, little sampling bias; the return-time slope can still carry a drifting offset. ` +
         `Reported in ${unitName}.`,
+      warnings,
+    };
+  }
+  const slopeEarly = slope.lengthsUsed !== null && slope.lengthsUsed[0] < SETTLED_FROM;
+  const smallLastStep = p.estimate !== null && p.step !== null && Math.abs(p.step) < EARLY_SLOPE_DRIFT;
+  if (slope.estimate !== null && slopeEarly && smallLastStep) {
+    return {
+      method: 'plugin-conditional',
+      reason:
+        `The return-time slope could only use n = ${slope.lengthsUsed?.[0]}..${slope.lengthsUsed?.[1]}, where the offset ` +
+        `E log R_n - n h still drifts by about ${EARLY_SLOPE_DRIFT} nats per level, while the conditional block entropies ` +
+        `change by less than that at the largest well-sampled k = ${p.k} (${stepText}); the plug-in there is the less ` +
+        `biased estimate. Reported in ${unitName}.`,
       warnings,
     };
   }

@@ -48,6 +48,18 @@ describe('chooseEntropyHeadline', () => {
     expect(withoutSlope.method).toBe('plugin-conditional');
   });
 
+  it('prefers the plug-in at its top k over a slope confined to small n when its last step is below the early drift', () => {
+    // source: the stated rule (entropyHeadline.ts, rule 2); the drift at small n is THEORY.md section 3's fair-coin table
+    const flatTop: PluginConditionalResult = { ...plugin(1.2734, false, 3), step: -0.00002, stepStandardError: 0.00007 };
+    const early = chooseEntropyHeadline(candidates({ returnSlope: est(1.363, 0.003, [2, 3]), pluginConditional: flatTop }), 'nat/symbol');
+    expect(early.method).toBe('plugin-conditional');
+    expect(early.reason).toContain('still drifts');
+    const settled = chooseEntropyHeadline(candidates({ returnSlope: est(1.27, 0.003, [7, 8]), pluginConditional: flatTop }), 'nat/symbol');
+    expect(settled.method).toBe('return-slope');
+    const falling: PluginConditionalResult = { ...flatTop, step: 0.2, stepStandardError: 0.001 };
+    expect(chooseEntropyHeadline(candidates({ returnSlope: est(1.363, 0.003, [2, 3]), pluginConditional: falling }), 'nat/symbol').method).toBe('return-slope');
+  });
+
   it('warns when a return slope disagrees with a converged plug-in by more than three standard errors', () => {
     // source: the stated rule: |0.68 - 0.693| = 0.013 > 3 * hypot(0.002, 0.001) = 0.0067
     const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.68, 0.002), pluginConditional: plugin(0.693, true) }), 'nat/symbol');
