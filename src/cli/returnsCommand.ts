@@ -1,4 +1,4 @@
-import { scanReturns } from '../core';
+import { capturedReturnsCsv, scanReturns } from '../core';
 import { guessFileFormat } from './guessFileFormat';
 import { isPositiveInteger, numberOption, readerOptionsFrom } from './options';
 import { openOutput } from './outputStream';
@@ -7,7 +7,6 @@ import type { CliIo } from './runCli';
 import { UsageError } from './usageError';
 
 type Values = Record<string, string | boolean | undefined>;
-const FLUSH_CHARS = 1 << 20;
 
 /**
  * `returnrate returns FILE --n N`: CSV `position,return_time,censored` for every position (0-based).
@@ -24,15 +23,6 @@ export async function returnsCommand(file: string | undefined, values: Values, i
   const scan = scanReturns(sequence.symbols, sequence.alphabet.length, { maxN: n, captureLevel: n, batchTarget: 1, sampleTarget: 1 });
   const captured = scan.captured!;
   const out = openOutput(values.out === undefined ? '-' : String(values.out), io.stdout);
-  let buffer = 'position,return_time,censored\n';
-  for (let i = 0; i < captured.length; i++) {
-    const r = captured[i]!;
-    buffer += r > 0 ? `${i},${r},0\n` : `${i},${-r - 1},1\n`;
-    if (buffer.length >= FLUSH_CHARS) {
-      await out.write(buffer);
-      buffer = '';
-    }
-  }
-  await out.write(buffer);
+  for (const chunk of capturedReturnsCsv(captured)) await out.write(chunk);
   await out.close();
 }

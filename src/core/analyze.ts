@@ -290,7 +290,9 @@ function pushDataWarnings(
     out.push({ code: 'short-sequence', message: `Only ${scan.length} symbols: every estimate here is rough.` });
   }
   if (first !== undefined && first.distinctBlocks === 1) {
+    // Every other data warning (maxN reached, matches cut short) would only restate this.
     out.push({ code: 'single-symbol', message: 'The sequence uses a single symbol: its entropy rate is 0 and nothing fluctuates.' });
+    return;
   }
   if (first !== undefined && first.observed === 0) {
     out.push({ code: 'no-returns', message: 'No symbol ever recurs: return times are all censored.' });

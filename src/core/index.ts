@@ -35,6 +35,7 @@ export type {
 } from './result/analysisResult';
 export { PROGRAM_VERSION } from './result/version';
 export { lengthsCsv } from './result/lengthsCsv';
+export { capturedReturnsCsv } from './result/returnsCsv';
 export { entropyFromNats, varianceFromNats, rateUnitLabel, varianceUnitLabel } from './estimate/units';
 export { EULER_GAMMA, LOG_EXPONENTIAL_VARIANCE } from './estimate/exponentialLaw';
 

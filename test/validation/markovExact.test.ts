@@ -7,16 +7,7 @@ import {
 } from '../../src/core/sources/markovEntropy';
 import { iidSource } from '../../src/core/sources/iidSource';
 import { goldenMeanSource, parryMatrix } from '../../src/core/sources/parrySource';
-
-const TWO_STATE = [
-  [0.9, 0.1],
-  [0.4, 0.6],
-];
-const THREE_STATE = [
-  [0.5, 0.3, 0.2],
-  [0.2, 0.6, 0.2],
-  [0.1, 0.2, 0.7],
-];
+import { TWO_STATE, THREE_STATE } from '../helpers/referenceChains';
 
 /** Relative agreement with a 12-digit value from THEORY.md: the printed digits limit it to ~1e-11. */
 const PRINTED = 1e-11;

@@ -10,19 +10,10 @@ import { liftMarkovOrder, markovSource } from '../../src/core/sources/markovSour
 import { goldenMeanSource } from '../../src/core/sources/parrySource';
 import { renewalMeanGap } from '../../src/core/sources/renewalLaw';
 import { renewalSource } from '../../src/core/sources/renewalSource';
+import { TWO_STATE, THREE_STATE } from '../helpers/referenceChains';
 
 /** Every statistical check allows 4 standard errors (two-sided miss probability 6e-5 each). */
 const Z = 4;
-
-const TWO_STATE = [
-  [0.9, 0.1],
-  [0.4, 0.6],
-];
-const THREE_STATE = [
-  [0.5, 0.3, 0.2],
-  [0.2, 0.6, 0.2],
-  [0.1, 0.2, 0.7],
-];
 
 function indicatorFunctional(size: number, test: (i: number, j: number) => boolean): number[][] {
   return Array.from({ length: size }, (_, i) => Array.from({ length: size }, (_, j) => (test(i, j) ? 1 : 0)));

@@ -1,38 +1,21 @@
-/**
- * Return times of single positions as CSV: `position,return_time,censored`. For a censored
- * position return_time is the lower bound c (only R > c is known) and censored is 1.
- * @throws RangeError when the arrays differ in length
- */
-export function returnsCsv(positions: ArrayLike<number>, returnTimes: ArrayLike<number>, censored: ArrayLike<boolean | number>): string {
-  if (positions.length !== returnTimes.length || positions.length !== censored.length) {
-    throw new RangeError(
-      `positions, returnTimes and censored must have equal lengths; got ${positions.length}, ${returnTimes.length}, ${censored.length}`,
-    );
-  }
-  const lines = new Array<string>(positions.length + 1);
-  lines[0] = 'position,return_time,censored';
-  for (let i = 0; i < positions.length; i++) {
-    lines[i + 1] = `${positions[i]},${returnTimes[i]},${censored[i] ? 1 : 0}`;
-  }
-  return lines.join('\n') + '\n';
-}
+const HEADER = 'position,return_time,censored\n';
 
 /**
  * The engine's captured level (ReturnScan.captured: forward R, or -(c + 1) when censored at c) as
- * CSV rows for positions 0, 1, ...
+ * CSV `position,return_time,censored` for positions 0, 1, ..., in chunks of `rowsPerChunk` rows so
+ * 10^8 rows never become one string. A censored row holds the lower bound c (only R > c is known)
+ * and censored = 1.
  */
-export function capturedReturnsCsv(captured: Int32Array): string {
-  const positions = new Int32Array(captured.length);
-  const times = new Int32Array(captured.length);
-  const censored = new Uint8Array(captured.length);
+export function* capturedReturnsCsv(captured: Int32Array, rowsPerChunk = 1 << 16): Generator<string> {
+  if (!Number.isInteger(rowsPerChunk) || rowsPerChunk < 1) throw new RangeError(`rowsPerChunk must be a positive integer; got ${rowsPerChunk}`);
+  let chunk = HEADER;
   for (let i = 0; i < captured.length; i++) {
-    positions[i] = i;
     const r = captured[i];
-    if (r > 0) times[i] = r;
-    else {
-      times[i] = -r - 1;
-      censored[i] = 1;
+    chunk += r > 0 ? `${i},${r},0\n` : `${i},${-r - 1},1\n`;
+    if ((i + 1) % rowsPerChunk === 0) {
+      yield chunk;
+      chunk = '';
     }
   }
-  return returnsCsv(positions, times, censored);
+  if (chunk !== '') yield chunk;
 }

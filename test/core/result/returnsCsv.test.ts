@@ -1,15 +1,20 @@
 import { describe, expect, it } from 'vitest';
-import { capturedReturnsCsv, returnsCsv } from '../../../src/core/result/returnsCsv';
+import { capturedReturnsCsv } from '../../../src/core/result/returnsCsv';
 
-describe('returnsCsv', () => {
-  it('writes position,return_time,censored rows', () => {
-    // source: API contract
-    expect(returnsCsv([0, 1, 2], [3, 7, 5], [false, false, true])).toBe('position,return_time,censored\n0,3,0\n1,7,0\n2,5,1\n');
-    expect(() => returnsCsv([0], [1, 2], [0])).toThrow(RangeError);
+describe('capturedReturnsCsv', () => {
+  it('reads the engine captured-level encoding: -(c + 1) is censored with lower bound c', () => {
+    // source: ReturnScan.captured encoding (levelStats.ts); "abracadabra" n = 4 starts [7, >6, ...] (THEORY.md section 9)
+    expect([...capturedReturnsCsv(Int32Array.from([7, -7, -1]))].join('')).toBe('position,return_time,censored\n0,7,0\n1,6,1\n2,0,1\n');
   });
 
-  it('reads the engine captured-level encoding: -(c + 1) is censored with lower bound c', () => {
-    // source: ReturnScan.captured encoding (levelStats.ts): "abracadabra" n = 4 from THEORY.md section 9: [7, >6, ...]
-    expect(capturedReturnsCsv(Int32Array.from([7, -7, -1]))).toBe('position,return_time,censored\n0,7,0\n1,6,1\n2,0,1\n');
+  it('splits the rows into chunks without changing the text', () => {
+    // source: API contract
+    const captured = Int32Array.from({ length: 10 }, (_, i) => (i % 3 === 0 ? -(i + 1) : i + 2));
+    const whole = [...capturedReturnsCsv(captured)];
+    const pieces = [...capturedReturnsCsv(captured, 3)];
+    expect(whole).toHaveLength(1);
+    expect(pieces).toHaveLength(4);
+    expect(pieces.join('')).toBe(whole[0]);
+    expect(() => [...capturedReturnsCsv(captured, 0)]).toThrow(RangeError);
   });
 });

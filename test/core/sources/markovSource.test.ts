@@ -1,11 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { markovEntropyRate, markovVarentropyRate } from '../../../src/core/sources/markovEntropy';
 import { liftMarkovOrder, markovSource } from '../../../src/core/sources/markovSource';
-
-const TWO_STATE = [
-  [0.9, 0.1],
-  [0.4, 0.6],
-];
+import { TWO_STATE } from '../../helpers/referenceChains';
 
 describe('markovSource', () => {
   it('states the exact h and sigma^2 of THEORY.md section 2', () => {
