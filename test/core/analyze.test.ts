@@ -59,6 +59,17 @@ describe('analyzeFromScan', () => {
     expect(JSON.parse(JSON.stringify(result))).toEqual(result);
   });
 
+  it('gives no interval for the estimators with a bias of known order (mean log R_n / n, variance growth)', () => {
+    // source: the stated rule (analyze.ts, alternative()): their intervals would cover sampling error only
+    const mean = result.entropy.alternatives['return-mean']!;
+    const growth = result.sigma2.alternatives['variance-growth']!;
+    expect(mean.estimate).not.toBeNull();
+    expect(mean.ci95).toBeNull();
+    expect(mean.note).toContain('No interval');
+    expect(growth.ci95).toBeNull();
+    expect(result.entropy.alternatives['return-slope']!.ci95).not.toBeNull();
+  });
+
   it('reports entropies in bits as the nat values divided by log 2, and sigma^2 by (log 2)^2', () => {
     // source: 1 bit = log 2 nats (definition)
     const bits = analyzeFromScan(scan, inputOf(3000, 2), { ...settings, unit: 'bit' });
