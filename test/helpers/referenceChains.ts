@@ -13,3 +13,15 @@ export const THREE_STATE: number[][] = [
   [0.2, 0.6, 0.2],
   [0.1, 0.2, 0.7],
 ];
+
+/**
+ * An order-2 binary chain for the tests of higher-order sources: row r is the law of the next symbol
+ * after the context r = 2 x_(t-2) + x_(t-1). Not a published example; its stationary law and
+ * rates are computed in the tests from the lifted order-1 chain.
+ */
+export const ORDER_TWO: number[][] = [
+  [0.8, 0.2],
+  [0.3, 0.7],
+  [0.6, 0.4],
+  [0.1, 0.9],
+];

@@ -10,7 +10,7 @@ import { liftMarkovOrder, markovSource } from '../../src/core/sources/markovSour
 import { goldenMeanSource } from '../../src/core/sources/parrySource';
 import { renewalMeanGap } from '../../src/core/sources/renewalLaw';
 import { renewalSource } from '../../src/core/sources/renewalSource';
-import { TWO_STATE, THREE_STATE } from '../helpers/referenceChains';
+import { TWO_STATE, THREE_STATE, ORDER_TWO } from '../helpers/referenceChains';
 
 /** Every statistical check allows 4 standard errors (two-sided miss probability 6e-5 each). */
 const Z = 4;
@@ -88,12 +88,7 @@ describe('Markov chain sources reproduce their transition law', () => {
 
   it('order-2 chain: context (x_{t-2}, x_{t-1}) read with the most recent symbol last', () => {
     // Rows: contexts 00, 01, 10, 11 (row = 2 x_{t-2} + x_{t-1}); invented test values.
-    const rows = [
-      [0.8, 0.2],
-      [0.3, 0.7],
-      [0.6, 0.4],
-      [0.1, 0.9],
-    ];
+    const rows = ORDER_TWO;
     const n = 1_000_000;
     const { symbols } = markovSource(rows, 2).generate(n, 13);
     const lift = liftMarkovOrder(rows, 2);
@@ -164,12 +159,7 @@ describe('Markov chain sources reproduce their transition law', () => {
   });
 
   it('order-2 chain starts with its first two symbols drawn from the stationary context law', () => {
-    const rows = [
-      [0.8, 0.2],
-      [0.3, 0.7],
-      [0.6, 0.4],
-      [0.1, 0.9],
-    ];
+    const rows = ORDER_TWO;
     const source = markovSource(rows, 2);
     const pi = stationaryDistribution(liftMarkovOrder(rows, 2).lifted.map((r) => Array.from(r)));
     const seeds = 4000;

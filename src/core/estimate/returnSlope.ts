@@ -1,7 +1,6 @@
-import { batchMeansInterval } from './batchMeans';
 import { notApplicable, type EstimatorResult } from './estimatorResult';
-import { leastSquaresSlope } from './leastSquaresSlope';
 import type { LevelBatchMoments } from './levelBatchMoments';
+import { slopeOverLevels } from './slopeOverLevels';
 
 /**
  * Entropy rate as the least-squares slope of the (censoring-corrected) mean of log R_n against n over
@@ -14,23 +13,9 @@ import type { LevelBatchMoments } from './levelBatchMoments';
  */
 export function returnSlope(range: readonly LevelBatchMoments[], confidence: number): EstimatorResult {
   if (range.length < 2) return notApplicable('A slope needs at least two trusted block lengths.');
-  const ns = new Float64Array(range.length);
-  const means = new Float64Array(range.length);
-  for (let j = 0; j < range.length; j++) {
-    ns[j] = range[j].n;
-    means[j] = range[j].mean ?? Number.NaN;
-  }
-  const estimate = leastSquaresSlope(ns, means);
+  const { estimate, interval: ci } = slopeOverLevels(range, 'mean', confidence);
   if (!Number.isFinite(estimate)) return notApplicable('The trusted levels have no observed returns.');
-  const a = range[0].batchMean.length;
-  const slopes = new Float64Array(a);
-  const column = new Float64Array(range.length);
-  for (let g = 0; g < a; g++) {
-    for (let j = 0; j < range.length; j++) column[j] = range[j].batchMean[g];
-    slopes[g] = leastSquaresSlope(ns, column);
-  }
   const top = range[range.length - 1];
-  const ci = batchMeansInterval(estimate, slopes, top.batchObserved, confidence);
   const lo = range[0].n;
   const hi = top.n;
   return {

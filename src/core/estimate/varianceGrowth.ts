@@ -1,7 +1,6 @@
-import { batchMeansInterval } from './batchMeans';
 import { notApplicable, type EstimatorResult } from './estimatorResult';
-import { leastSquaresSlope } from './leastSquaresSlope';
 import type { LevelBatchMoments } from './levelBatchMoments';
+import { slopeOverLevels } from './slopeOverLevels';
 
 /**
  * sigma^2 as the least-squares slope of Var(log R_n) against n over the trusted range, nats^2 per
@@ -12,23 +11,9 @@ import type { LevelBatchMoments } from './levelBatchMoments';
  */
 export function varianceGrowth(range: readonly LevelBatchMoments[], confidence: number): EstimatorResult {
   if (range.length < 2) return notApplicable('A variance slope needs at least two trusted block lengths.');
-  const ns = new Float64Array(range.length);
-  const vars = new Float64Array(range.length);
-  for (let j = 0; j < range.length; j++) {
-    ns[j] = range[j].n;
-    vars[j] = range[j].variance ?? Number.NaN;
-  }
-  const estimate = leastSquaresSlope(ns, vars);
+  const { estimate, interval: ci } = slopeOverLevels(range, 'variance', confidence);
   if (!Number.isFinite(estimate)) return notApplicable('The trusted levels have too few observed returns.');
-  const a = range[0].batchVariance.length;
-  const slopes = new Float64Array(a);
-  const column = new Float64Array(range.length);
-  for (let g = 0; g < a; g++) {
-    for (let j = 0; j < range.length; j++) column[j] = range[j].batchVariance[g];
-    slopes[g] = leastSquaresSlope(ns, column);
-  }
   const top = range[range.length - 1];
-  const ci = batchMeansInterval(estimate, slopes, top.batchObserved, confidence);
   return {
     estimate,
     standardError: ci === null ? null : ci.standardError,

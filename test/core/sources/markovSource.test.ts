@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { markovEntropyRate, markovVarentropyRate } from '../../../src/core/sources/markovEntropy';
 import { liftMarkovOrder, markovSource } from '../../../src/core/sources/markovSource';
-import { TWO_STATE } from '../../helpers/referenceChains';
+import { TWO_STATE, ORDER_TWO } from '../../helpers/referenceChains';
 
 describe('markovSource', () => {
   it('states the exact h and sigma^2 of THEORY.md section 2', () => {
@@ -45,12 +45,7 @@ describe('markovSource', () => {
   });
 
   it('lifts an order-k chain to A^k contexts with A transitions each', () => {
-    const rows = [
-      [0.8, 0.2],
-      [0.3, 0.7],
-      [0.6, 0.4],
-      [0.1, 0.9],
-    ];
+    const rows = ORDER_TWO;
     const lift = liftMarkovOrder(rows, 2);
     expect(lift.states).toBe(4);
     // Context 1 = (x_{t-2}, x_{t-1}) = (0, 1); emitting j moves to (1, j) = 2 + j.
@@ -71,12 +66,7 @@ describe('markovSource', () => {
   });
 
   it('gives information whose sum is -log mu of the path, checked by the chain rule', () => {
-    const rows = [
-      [0.8, 0.2],
-      [0.3, 0.7],
-      [0.6, 0.4],
-      [0.1, 0.9],
-    ];
+    const rows = ORDER_TWO;
     const source = markovSource(rows, 2);
     const lift = liftMarkovOrder(rows, 2);
     const { sequence, information } = source.generateDetailed!(12, 3);
@@ -96,12 +86,7 @@ describe('markovSource', () => {
   });
 
   it('emits only the first symbols of the start context when the length is below the order', () => {
-    const rows = [
-      [0.8, 0.2],
-      [0.3, 0.7],
-      [0.6, 0.4],
-      [0.1, 0.9],
-    ];
+    const rows = ORDER_TWO;
     const source = markovSource(rows, 2);
     const long = source.generate(5, 8);
     const short = source.generate(1, 8);
