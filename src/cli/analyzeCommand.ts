@@ -1,6 +1,6 @@
 import { basename } from 'node:path';
-import { analyzeSequence, parseSourceSpec } from '../core';
-import type { AnalysisSettings, ReferenceFacts, Sequence } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
+import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
@@ -16,6 +16,8 @@ interface Loaded {
   input: { name: string; sha256: string | null; format: string };
   reference: ReferenceFacts | undefined;
   readSeconds: number;
+  /** FASTA records to analyse one by one (--fasta-records separate), else null. */
+  separate: FastaRecord[] | null;
 }
 
 async function load(file: string | undefined, values: Values, io: CliIo): Promise<Loaded> {
@@ -32,6 +34,7 @@ async function load(file: string | undefined, values: Values, io: CliIo): Promis
       input: { name: `${source.id} (length ${length}, seed ${seed})`, sha256: null, format: 'generated' },
       reference: { source: source.id, entropyRateNats: source.facts.entropyRate, sigma2Nats: source.facts.sigma2 },
       readSeconds: (performance.now() - t0) / 1000,
+      separate: null,
     };
   }
   if (file === undefined) throw new UsageError('analyze needs a FILE (or --source SPEC --length L)');
@@ -43,6 +46,7 @@ async function load(file: string | undefined, values: Values, io: CliIo): Promis
     input: { name: basename(file), sha256: read.sha256, format: options.format },
     reference: undefined,
     readSeconds: (performance.now() - t0) / 1000,
+    separate: options.format === 'fasta' && options.fastaRecords === 'separate' && read.records !== undefined ? read.records : null,
   };
 }
 
@@ -57,10 +61,39 @@ function fitMaxN(settings: AnalysisSettings, N: number, given: boolean): Analysi
   return { ...settings, maxN: N - 1 };
 }
 
+/**
+ * `--fasta-records separate`: every record analysed on its own (no block crosses a boundary); JSON
+ * is an ANALYSIS_SET_SCHEMA object holding one result per record. Records too short for any block
+ * length are named on standard error and left out.
+ */
+async function analyzeRecords(loaded: Loaded, records: FastaRecord[], options: AnalysisSettings, values: Values, io: CliIo): Promise<void> {
+  const results: AnalysisResult[] = [];
+  for (const { record, sequence } of recordSequences(loaded.sequence, records)) {
+    if (sequence.symbols.length < 2) {
+      io.stderr.write(`returnrate: note: record "${record.name}" has ${sequence.symbols.length} symbol(s) and is left out\n`);
+      continue;
+    }
+    const settings = fitMaxN(options, sequence.symbols.length, false);
+    const input = { ...loaded.input, name: `${loaded.input.name} > ${record.name || '(no header)'}` };
+    results.push(analyzeSequence(sequence, input, settings));
+  }
+  if (results.length === 0) throw new RangeError('no FASTA record holds at least 2 symbols');
+  const json = values.json === undefined ? undefined : String(values.json);
+  if (json !== undefined) {
+    const out = openOutput(json, io.stdout);
+    await out.write(JSON.stringify({ schema: ANALYSIS_SET_SCHEMA, records: results }, null, 2) + '\n');
+    await out.close();
+  }
+  if (json !== '-' && values.quiet !== true) {
+    io.stdout.write(results.map((r) => summaryText(r, { table: values['no-table'] !== true })).join('\n'));
+  }
+}
+
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   const options = settingsFrom(values);
   const loaded = await load(file, values, io);
+  if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.

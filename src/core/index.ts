@@ -9,6 +9,7 @@ export type { ReadErrorCode, InputPosition } from './sequence/readError';
 export { createReader, readAll } from './sequence/sequenceReader';
 export type { InputFormat, ReaderOptions, ReadResult, SequenceReader, FastaRecord, ReadWarning } from './sequence/sequenceReader';
 export { guessFormat, SNIFF_BYTES } from './sequence/guessFormat';
+export { recordSequences } from './sequence/recordSequences';
 
 // The return-time engine
 export { scanReturns, ScanCancelled } from './returns/scanReturns';
@@ -19,7 +20,7 @@ export { HISTOGRAM_BINS_PER_NAT } from './returns/levelStats';
 // The analysis and its result
 export { analyzeSequence, analyzeFromScan, validateSettings } from './analyze';
 export type { AnalysisHooks, ReferenceFacts, AnalysisMethodOptions } from './analyze';
-export { ANALYSIS_SCHEMA, DEFAULT_SETTINGS } from './result/analysisResult';
+export { ANALYSIS_SCHEMA, ANALYSIS_SET_SCHEMA, DEFAULT_SETTINGS } from './result/analysisResult';
 export type {
   AnalysisResult,
   AnalysisSettings,

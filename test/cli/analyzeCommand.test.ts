@@ -150,3 +150,30 @@ describe('returnrate analyze prints a human summary', () => {
     expect(version).toEqual({ code: 0, stdout: `${PROGRAM_VERSION}\n`, stderr: '' });
   });
 });
+
+describe('returnrate analyze --fasta-records separate', () => {
+  it('analyses every record on its own and names the ones too short to analyse', async () => {
+    // source: API contract; the records hold invented bases, only the shape of the output is checked
+    const bases = (seed: number, n: number): string => {
+      let s = seed;
+      let out = '';
+      for (let i = 0; i < n; i++) {
+        s = (Math.imul(s, 1103515245) + 12345) >>> 0;
+        out += 'ACGT'[s >>> 30];
+      }
+      return out;
+    };
+    const path = folder.file('reads.fa', `>first\n${bases(1, 3000)}\n>tiny\nA\n>second\n${bases(2, 2000)}\n`);
+    const run = await cli('analyze', path, '--fasta-records', 'separate', '--json', '-', '--max-n', '8');
+    expect(run.code).toBe(0);
+    expect(run.stderr).toBe('returnrate: note: record "tiny" has 1 symbol(s) and is left out\n');
+    const set = JSON.parse(run.stdout) as { schema: string; records: AnalysisJson[] };
+    expect(set.schema).toBe('returnrate.analysis-set/1');
+    expect(set.records.map((r) => [r.input.name, r.input.symbols])).toEqual([
+      ['reads.fa > first', 3000],
+      ['reads.fa > second', 2000],
+    ]);
+    const together = await cli('analyze', path, '--json', '-', '--max-n', '8');
+    expect((JSON.parse(together.stdout) as AnalysisJson).input.symbols).toBe(5001);
+  });
+});

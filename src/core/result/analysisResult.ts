@@ -3,6 +3,8 @@
  * command line (`--json`) and saved sessions. Add fields freely; never rename the ones here.
  */
 export const ANALYSIS_SCHEMA = 'returnrate.analysis/1';
+/** Several analyses of one input (e.g. one per FASTA record): { schema, records: AnalysisResult[] }. */
+export const ANALYSIS_SET_SCHEMA = 'returnrate.analysis-set/1';
 
 export type EntropyUnit = 'nat' | 'bit';
 
