@@ -1,4 +1,4 @@
-import type { AnalysisResult, LengthRow } from '../core';
+import type { AnalysisResult, LengthRow, SymbolCount } from '../core';
 
 const fmt = (x: number | null | undefined, digits = 4): string => (x === null || x === undefined || !Number.isFinite(x) ? '-' : x.toFixed(digits));
 const interval = (ci: readonly [number, number] | null | undefined, digits = 4): string => (ci ? `[${fmt(ci[0], digits)}, ${fmt(ci[1], digits)}]` : '');
@@ -11,6 +11,7 @@ export function summaryText(result: AnalysisResult, options: { table: boolean })
   const level = Math.round(settings.confidence * 100);
   lines.push(`returnrate ${result.program.version}: ${input.name}`);
   lines.push(`  ${input.symbols.toLocaleString('en-US')} symbols, alphabet of ${input.alphabetSize}, read as ${input.format}${input.sha256 ? `, sha256 ${input.sha256.slice(0, 16)}...` : ''}`);
+  if (input.alphabet !== undefined) lines.push(`  alphabet (symbol count): ${alphabetText(input.alphabet, input.alphabetSize)}`);
   lines.push('');
   lines.push(`entropy rate   h = ${fmt(entropy.estimate)} ${unit}   ${level}% interval ${interval(entropy.ci95)}`);
   lines.push(`  method ${entropy.method}, block lengths n = ${entropy.lengthsUsed[0]}..${entropy.lengthsUsed[1]}`);
@@ -46,6 +47,12 @@ export function summaryText(result: AnalysisResult, options: { table: boolean })
     for (const w of result.warnings) lines.push(`  - ${w.message}`);
   }
   return lines.join('\n') + '\n';
+}
+
+/** Up to 12 symbols with their counts, most frequent first, then how many more there are. */
+function alphabetText(alphabet: readonly SymbolCount[], size: number): string {
+  const shown = alphabet.slice(0, 12).map((s) => `${JSON.stringify(s.symbol)} ${s.count}`);
+  return shown.join(', ') + (size > shown.length ? `, ... (${size - shown.length} more)` : '');
 }
 
 function tableText(rows: readonly LengthRow[], unit: string): string {

@@ -6,6 +6,7 @@ import type {
   InputSummary,
   LengthRow,
 } from './result/analysisResult';
+import { alphabetSummary } from './result/alphabetSummary';
 import { ANALYSIS_SCHEMA } from './result/analysisResult';
 import { PROGRAM_VERSION } from './result/version';
 import type { LevelStats, ReturnScan } from './returns/levelStats';
@@ -109,7 +110,14 @@ export function analyzeSequence(
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
   };
   const scan = scanReturns(sequence.symbols, sequence.alphabet.length, options);
-  const summary: InputSummary = { ...input, symbols: N, alphabetSize: sequence.alphabet.length };
+  const listed = alphabetSummary(sequence);
+  const summary: InputSummary = {
+    ...input,
+    symbols: N,
+    alphabetSize: sequence.alphabet.length,
+    alphabet: listed.symbols,
+    alphabetUnlisted: listed.unlisted,
+  };
   return analyzeFromScan(scan, summary, settings, hooks.reference === undefined ? {} : { reference: hooks.reference });
 }
 

@@ -35,6 +35,8 @@ export type {
   Sigma2Estimate,
 } from './result/analysisResult';
 export { PROGRAM_VERSION } from './result/version';
+export { alphabetSummary, ALPHABET_LISTED } from './result/alphabetSummary';
+export type { SymbolCount } from './result/alphabetSummary';
 export { lengthsCsv } from './result/lengthsCsv';
 export { capturedReturnsCsv } from './result/returnsCsv';
 export { entropyFromNats, varianceFromNats, rateUnitLabel, varianceUnitLabel } from './estimate/units';

@@ -133,7 +133,10 @@ describe('analyzeSequence', () => {
     const seen: number[] = [];
     const r = analyzeSequence(seq, { name: 'chain', sha256: null, format: 'generated' }, settings, { onLevel: (n) => seen.push(n) });
     expect(seen).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
-    expect(r.input).toEqual({ name: 'chain', sha256: null, format: 'generated', symbols: 5000, alphabetSize: 2 });
+    const { alphabet, alphabetUnlisted, ...rest } = r.input;
+    expect(rest).toEqual({ name: 'chain', sha256: null, format: 'generated', symbols: 5000, alphabetSize: 2 });
+    expect(alphabetUnlisted).toBe(0);
+    expect(alphabet!.reduce((sum, s) => sum + s.count, 0)).toBe(5000);
     expect(r.reference).toBeNull();
   });
 

@@ -2,6 +2,8 @@
  * The serializable outcome of one analysis: plain data, versioned, the same for the workbench, the
  * command line (`--json`) and saved sessions. Add fields freely; never rename the ones here.
  */
+import type { SymbolCount } from './alphabetSummary';
+
 export const ANALYSIS_SCHEMA = 'returnrate.analysis/1';
 /** Several analyses of one input (e.g. one per FASTA record): { schema, records: AnalysisResult[] }. */
 export const ANALYSIS_SET_SCHEMA = 'returnrate.analysis-set/1';
@@ -37,6 +39,11 @@ export interface InputSummary {
   readonly sha256: string | null;
   /** Reader format, e.g. 'chars', 'tokens', 'fasta', 'csv', 'bytes', or 'generated'. */
   readonly format: string;
+  /** The alphabet with counts, most frequent first, at most ALPHABET_LISTED symbols (absent when
+   * the analysis was built from a scan alone). */
+  readonly alphabet?: readonly SymbolCount[];
+  /** Symbols of the alphabet not listed in `alphabet`. */
+  readonly alphabetUnlisted?: number;
 }
 
 /** One row of the per-n table; log R in nats, entropies in the output unit. */
