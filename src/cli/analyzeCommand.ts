@@ -89,6 +89,20 @@ async function analyzeRecords(loaded: Loaded, records: FastaRecord[], options: A
   }
 }
 
+/**
+ * A progress reporter for long runs: one line on standard error, rewritten after each block length,
+ * when --progress is given or standard error is a terminal; null otherwise (pipes and tests stay
+ * clean).
+ */
+function progressLine(io: CliIo, values: Values, maxN: number, started: number): ((n: number, active: number) => void) | null {
+  const terminal = (io.stderr as { isTTY?: boolean }).isTTY === true;
+  if (values.progress !== true && !terminal) return null;
+  return (n, active) => {
+    const seconds = ((performance.now() - started) / 1000).toFixed(1);
+    io.stderr.write(`\rreturnrate: block length ${n} of ${maxN}, ${active.toLocaleString('en-US')} positions still in play, ${seconds} s   `);
+  };
+}
+
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   const options = settingsFrom(values);
@@ -99,14 +113,17 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;
   let lastActive = 0;
+  const progress = progressLine(io, values, settings.maxN, t1);
   const result = analyzeSequence(loaded.sequence, loaded.input, settings, {
-    onLevel: (_n, active) => {
+    onLevel: (n, active) => {
       positionLevels += active;
       lastActive = active;
+      progress?.(n, active);
     },
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
   });
   const analysisSeconds = (performance.now() - t1) / 1000;
+  if (progress !== null) io.stderr.write('\n');
   const json = values.json === undefined ? undefined : String(values.json);
   if (json !== undefined) {
     const out = openOutput(json, io.stdout);

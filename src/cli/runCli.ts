@@ -38,6 +38,8 @@ analysis options
       --interval SECONDS     sampling interval: rates also per second
       --confidence P         level of every interval (default 0.95)
       --max-censored F       largest censored fraction inside the trusted range (default 0.01)
+      --progress             show the block length being processed on standard error (the default
+                             when standard error is a terminal; Ctrl-C stops the run)
       --timing               print timing and peak memory as one JSON line on standard error
 
 reference sources (SPEC / SOURCE)
@@ -55,6 +57,7 @@ const OPTIONS = {
   'no-table': { type: 'boolean' },
   quiet: { type: 'boolean', short: 'q' },
   timing: { type: 'boolean' },
+  progress: { type: 'boolean' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },
   seed: { type: 'string', short: 's' },

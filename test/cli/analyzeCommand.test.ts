@@ -177,3 +177,15 @@ describe('returnrate analyze --fasta-records separate', () => {
     expect((JSON.parse(together.stdout) as AnalysisJson).input.symbols).toBe(5001);
   });
 });
+
+describe('returnrate analyze --progress', () => {
+  it('rewrites one progress line per block length on standard error and ends it', async () => {
+    // source: API contract (runCli.ts help text)
+    const run = await cli('analyze', chain, '--format', 'chars', '--max-n', '6', '--progress', '--quiet');
+    expect(run.code).toBe(0);
+    const updates = run.stderr.split('\r').filter((part) => part.includes('block length'));
+    expect(updates).toHaveLength(6);
+    expect(updates[5]).toContain('block length 6 of 6');
+    expect(run.stderr.endsWith('\n')).toBe(true);
+  });
+});
