@@ -78,13 +78,18 @@ async function analyzeRecords(loaded: Loaded, records: FastaRecord[], options: A
     results.push(analyzeSequence(sequence, input, settings));
   }
   if (results.length === 0) throw new RangeError('no FASTA record holds at least 2 symbols');
-  const json = values.json === undefined ? undefined : String(values.json);
-  if (json !== undefined) {
-    const out = openOutput(json, io.stdout);
-    await out.write(JSON.stringify({ schema: ANALYSIS_SET_SCHEMA, records: results }, null, 2) + '\n');
+  await emit({ schema: ANALYSIS_SET_SCHEMA, records: results }, results, values, io);
+}
+
+/** The JSON (--json PATH or -) and, unless it went to standard output or --quiet, the summaries. */
+async function emit(json: unknown, results: readonly AnalysisResult[], values: Values, io: CliIo): Promise<void> {
+  const target = values.json === undefined ? undefined : String(values.json);
+  if (target !== undefined) {
+    const out = openOutput(target, io.stdout);
+    await out.write(JSON.stringify(json, null, 2) + '\n');
     await out.close();
   }
-  if (json !== '-' && values.quiet !== true) {
+  if (target !== '-' && values.quiet !== true) {
     io.stdout.write(results.map((r) => summaryText(r, { table: values['no-table'] !== true })).join('\n'));
   }
 }
@@ -124,13 +129,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   });
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
-  const json = values.json === undefined ? undefined : String(values.json);
-  if (json !== undefined) {
-    const out = openOutput(json, io.stdout);
-    await out.write(JSON.stringify(result, null, 2) + '\n');
-    await out.close();
-  }
-  if (json !== '-' && values.quiet !== true) io.stdout.write(summaryText(result, { table: values['no-table'] !== true }));
+  await emit(result, [result], values, io);
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {
