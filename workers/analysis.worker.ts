@@ -1,7 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { sha256 } from '@noble/hashes/sha2.js';
-import { bytesToHex } from '@noble/hashes/utils.js';
-import { analyzeSequence, createReader, readAll } from '../src/core';
+import { analyzeSequence, createDigestingReader } from '../src/core';
 import type { AnalysisResult, AnalysisSettings, ReadResult, ReaderOptions } from '../src/core';
 import { demoScenario } from './demoScenarios';
 
@@ -15,16 +13,14 @@ export type FileReadOptions = ReaderOptions & { readonly name: string };
 /** Report reading progress about every 4 MiB. */
 const READ_REPORT_BYTES = 1 << 22;
 
-async function readBlob(blob: Blob, options: ReaderOptions, onProgress: ProgressCallback): Promise<{ read: ReadResult; hex: string }> {
-  const reader = createReader({ ...options, sizeHint: blob.size });
-  const hash = sha256.create();
+async function readBlob(blob: Blob, options: ReaderOptions, onProgress: ProgressCallback): Promise<ReadResult & { sha256: string }> {
+  const reader = createDigestingReader({ ...options, sizeHint: blob.size });
   const stream = blob.stream().getReader();
   let bytes = 0;
   let reported = 0;
   for (;;) {
     const { done, value } = await stream.read();
     if (done) break;
-    hash.update(value);
     reader.push(value);
     bytes += value.length;
     if (bytes - reported >= READ_REPORT_BYTES) {
@@ -32,7 +28,13 @@ async function readBlob(blob: Blob, options: ReaderOptions, onProgress: Progress
       onProgress({ kind: 'read', bytes, totalBytes: blob.size });
     }
   }
-  return { read: reader.finish(), hex: bytesToHex(hash.digest()) };
+  return reader.finish();
+}
+
+function readBuffer(buffer: ArrayBuffer, options: ReaderOptions): ReadResult & { sha256: string } {
+  const reader = createDigestingReader(options);
+  reader.push(new Uint8Array(buffer));
+  return reader.finish();
 }
 
 function release(callback: ProgressCallback): void {
@@ -44,11 +46,8 @@ const api = {
   async analyzeBytes(input: ArrayBuffer | Blob, options: FileReadOptions, settings: AnalysisSettings, onProgress: ProgressCallback): Promise<AnalysisResult> {
     try {
       const { name, ...readerOptions } = options;
-      const { read, hex } =
-        input instanceof ArrayBuffer
-          ? { read: readAll(new Uint8Array(input), readerOptions), hex: bytesToHex(sha256(new Uint8Array(input))) }
-          : await readBlob(input, readerOptions, onProgress);
-      const result = analyzeSequence(read.sequence, { name, sha256: hex, format: readerOptions.format }, settings, {
+      const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
+      const result = analyzeSequence(read.sequence, { name, sha256: read.sha256, format: readerOptions.format }, settings, {
         onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
       });
       return read.warnings.length === 0 ? result : { ...result, warnings: [...read.warnings, ...result.warnings] };

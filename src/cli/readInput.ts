@@ -1,8 +1,6 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
-import { sha256 } from '@noble/hashes/sha2.js';
-import { bytesToHex } from '@noble/hashes/utils.js';
-import { ReadError, createReader } from '../core';
+import { ReadError, createDigestingReader } from '../core';
 import type { ReadResult, ReaderOptions } from '../core';
 
 /** Bytes per read from disk; the reader takes any chunk size, 1 MiB keeps calls few and memory flat. */
@@ -26,18 +24,13 @@ export async function readInputFile(path: string, options: ReaderOptions): Promi
   } catch (e) {
     throw fileError(e, path);
   }
-  const reader = createReader(options.sizeHint === undefined && size !== undefined ? { ...options, sizeHint: size } : options);
-  const hash = sha256.create();
+  const reader = createDigestingReader(options.sizeHint === undefined && size !== undefined ? { ...options, sizeHint: size } : options);
   try {
-    for await (const chunk of createReadStream(path, { highWaterMark: CHUNK_BYTES })) {
-      const bytes = chunk as Buffer;
-      hash.update(bytes);
-      reader.push(bytes);
-    }
+    for await (const chunk of createReadStream(path, { highWaterMark: CHUNK_BYTES })) reader.push(chunk as Buffer);
   } catch (e) {
     throw fileError(e, path);
   }
-  return { ...reader.finish(), sha256: bytesToHex(hash.digest()) };
+  return reader.finish();
 }
 
 /** Node's file errors as ReadError with the path; everything else unchanged. */

@@ -7,6 +7,8 @@ export { allocateSymbols } from './sequence/sequence';
 export { ReadError } from './sequence/readError';
 export type { ReadErrorCode, InputPosition } from './sequence/readError';
 export { createReader, readAll } from './sequence/sequenceReader';
+export { createDigestingReader } from './sequence/digestingReader';
+export type { DigestingReader } from './sequence/digestingReader';
 export type { InputFormat, ReaderOptions, ReadResult, SequenceReader, FastaRecord, ReadWarning } from './sequence/sequenceReader';
 export { guessFormat, SNIFF_BYTES } from './sequence/guessFormat';
 export { recordSequences } from './sequence/recordSequences';
