@@ -44,6 +44,8 @@ export interface AnalysisHooks {
   /** Facts of the reference source the sequence was generated from, in nats; the result states them
    * in the output unit. */
   readonly reference?: ReferenceFacts;
+  /** Positions to sample for the paths (rounded so the stride is a power of two); default 256. */
+  readonly pathSamples?: number;
 }
 
 /** A reference source's exact values in nats (per symbol, and nats^2 for sigma^2). */
@@ -106,6 +108,7 @@ export function analyzeSequence(
   const onLevel = hooks.onLevel;
   const options: ScanOptions = {
     maxN: settings.maxN,
+    ...(hooks.pathSamples === undefined ? {} : { sampleTarget: hooks.pathSamples }),
     ...(onLevel === undefined ? {} : { onLevel: (level, active) => onLevel(level.n, active) }),
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
   };
@@ -346,17 +349,28 @@ function pushDataWarnings(
   }
 }
 
-/** Sampled forward paths as log R (null where censored or past the end). */
+/** Sampled forward paths in nats: log R (null where censored or past the end), the censoring bound
+ * and log of the block's count. */
 function pathsOf(scan: ReturnScan): AnalysisResult['paths'] {
-  const { positions, forward, maxN } = scan.paths;
+  const { positions, forward, counts, maxN } = scan.paths;
   const logReturn: (number | null)[][] = [];
+  const logCensoredBound: (number | null)[][] = [];
+  const logCount: (number | null)[][] = [];
   for (let s = 0; s < positions.length; s++) {
     const row: (number | null)[] = new Array<number | null>(maxN);
+    const bound: (number | null)[] = new Array<number | null>(maxN);
+    const count: (number | null)[] = new Array<number | null>(maxN);
     for (let n = 1; n <= maxN; n++) {
-      const r = forward[s * maxN + n - 1];
+      const k = s * maxN + n - 1;
+      const r = forward[k];
       row[n - 1] = r > 0 ? Math.log(r) : null;
+      // A censored return is only known to exceed N - n - i = -r - 1 (which may be 0).
+      bound[n - 1] = r < 0 && -r - 1 > 0 ? Math.log(-r - 1) : null;
+      count[n - 1] = counts[k] > 0 ? Math.log(counts[k]) : null;
     }
     logReturn.push(row);
+    logCensoredBound.push(bound);
+    logCount.push(count);
   }
-  return { positions: Array.from(positions), logReturn };
+  return { positions: Array.from(positions), logReturn, logCensoredBound, logCount };
 }

@@ -34,6 +34,7 @@ export type {
   InputSummary,
   Interval,
   LengthRow,
+  SampledPathsSummary,
   Sigma2Estimate,
 } from './result/analysisResult';
 export { PROGRAM_VERSION } from './result/version';

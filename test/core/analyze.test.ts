@@ -99,6 +99,20 @@ describe('analyzeFromScan', () => {
       }
     });
   });
+
+  it('gives the log block count and, for a censored return, the log of its lower bound N - n - i', () => {
+    // source: SampledPaths encoding (levelStats.ts); counts and returns from the brute-force scan
+    const { positions, logCount, logCensoredBound } = result.paths;
+    const N = scan.length;
+    positions.forEach((p, s) => {
+      for (let n = 1; n <= 12; n++) {
+        const c = scan.paths.counts[s * 12 + n - 1]!;
+        expect(logCount![s]![n - 1]).toBe(p <= N - n ? Math.log(c) : null);
+        const f = scan.paths.forward[s * 12 + n - 1]!;
+        expect(logCensoredBound![s]![n - 1]).toBe(f < 0 && N - n - p > 0 ? Math.log(N - n - p) : null);
+      }
+    });
+  });
 });
 
 describe('analyzeFromScan warnings', () => {

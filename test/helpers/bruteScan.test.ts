@@ -49,6 +49,7 @@ describe('bruteScan', () => {
       expect(slow.matchPositions).toBe(fast.matchPositions);
       expect(slow.exhausted).toBe(fast.exhausted);
       expect(Array.from(slow.paths.forward)).toEqual(Array.from(fast.paths.forward));
+      expect(Array.from(slow.paths.counts)).toEqual(Array.from(fast.paths.counts));
       for (let n = 1; n <= maxN; n++) {
         const s = slow.levels[n - 1]!;
         const f = fast.levels[n - 1]!;

@@ -41,6 +41,7 @@ export function bruteScan(symbols: ArrayLike<number>, alphabetSize: number, opti
   const samplePositions = new Int32Array(sampleCount);
   for (let s = 0; s < sampleCount; s++) samplePositions[s] = s * sampleStride;
   const forwardPaths = new Float64Array(sampleCount * maxN);
+  const countPaths = new Float64Array(sampleCount * maxN);
 
   const levels: LevelStats[] = [];
   for (let n = 1; n <= maxN; n++) {
@@ -131,6 +132,7 @@ export function bruteScan(symbols: ArrayLike<number>, alphabetSize: number, opti
     for (let s = 0; s < sampleCount; s++) {
       const p = samplePositions[s]!;
       forwardPaths[s * maxN + n - 1] = p > N - n ? 0 : forward[p]! > 0 ? forward[p]! : -(N - n - p + 1);
+      countPaths[s * maxN + n - 1] = p > N - n ? 0 : count[p]!;
     }
 
     levels.push({
@@ -165,7 +167,7 @@ export function bruteScan(symbols: ArrayLike<number>, alphabetSize: number, opti
     batchCount,
     matchWindow,
     matchPositions: Math.max(0, N - maxN - matchWindow),
-    paths: { positions: samplePositions, forward: forwardPaths, maxN },
+    paths: { positions: samplePositions, forward: forwardPaths, counts: countPaths, maxN },
     exhausted: levels.some((l) => l.n < maxN && l.distinctBlocks === l.positions),
     captured: null,
   };

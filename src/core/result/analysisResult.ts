@@ -144,6 +144,19 @@ export interface AnalysisWarning {
   readonly message: string;
 }
 
+/** Per sampled position (row) and block length n (column n - 1), all in nats. */
+export interface SampledPathsSummary {
+  readonly positions: readonly number[];
+  /** log R_n; null when censored or when the position has no n-block. */
+  readonly logReturn: readonly (readonly (number | null)[])[];
+  /** For a censored return, log of its lower bound N - n - i (R_n > that); null otherwise or when the
+   * bound is 0. Absent in results saved before it was added. */
+  readonly logCensoredBound?: readonly (readonly (number | null)[])[];
+  /** log of the number of occurrences of the position's n-block in the sequence (0 when unique);
+   * null past the end. Absent in results saved before it was added. */
+  readonly logCount?: readonly (readonly (number | null)[])[];
+}
+
 export interface AnalysisResult {
   readonly schema: typeof ANALYSIS_SCHEMA;
   readonly program: { readonly name: 'returnrate'; readonly version: string };
@@ -153,9 +166,8 @@ export interface AnalysisResult {
   readonly entropy: EntropyEstimate;
   readonly sigma2: Sigma2Estimate;
   readonly exponentialLaw: ExponentialLawSummary | null;
-  /** Sampled forward paths: positions and, per position, log R_n for n = 1..maxN (null = censored
-   * or beyond the end). */
-  readonly paths: { readonly positions: readonly number[]; readonly logReturn: readonly (readonly (number | null)[])[] };
+  /** Sampled forward paths (every stride-th position), per position and n = 1..maxN, in nats. */
+  readonly paths: SampledPathsSummary;
   /** Reference source facts when the input was generated from one, in the output unit. */
   readonly reference: { readonly source: string; readonly entropyRate: number | null; readonly sigma2: number | null } | null;
   readonly warnings: readonly AnalysisWarning[];

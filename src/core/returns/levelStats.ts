@@ -67,6 +67,8 @@ export interface SampledPaths {
   /** Row-major [sample][n-1]: forward R_n, or -(lower bound + 1) when censored, or 0 when the
    * position has no n-block (it lies past N - n). */
   readonly forward: Float64Array;
+  /** Same layout: count of the position's n-block in the whole sequence (1 when unique, 0 past the end). */
+  readonly counts: Float64Array;
   readonly maxN: number;
 }
 

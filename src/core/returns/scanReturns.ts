@@ -1,7 +1,10 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
-import { HISTOGRAM_BINS_PER_NAT, type LevelStats, type ReturnScan, type SampledPaths } from './levelStats';
-import { logOfPositive } from './logOfPositive';
+import { collectReturns, type LevelSums, type ReturnGeometry } from './collectReturns';
+import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
+import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
+
+export { ScanCancelled } from './partitionLevel';
 
 export interface ScanOptions {
   /** Largest block length, 1 <= maxN <= N. */
@@ -21,17 +24,6 @@ export interface ScanOptions {
   /** Keep the forward return of every position at this one block length (see ReturnScan.captured). */
   readonly captureLevel?: number;
 }
-
-/** The scan was stopped by its caller; nothing it computed is returned. */
-export class ScanCancelled extends Error {
-  override readonly name = 'ScanCancelled';
-  constructor() {
-    super('the computation was cancelled');
-  }
-}
-
-/** Positions processed between two polls of shouldStop. */
-const POLL_EVERY = 1 << 20;
 
 /**
  * First returns of every n-block, n = 1..maxN, at every position, summarized per level.
@@ -59,7 +51,6 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   const batchCount = Math.ceil(N / batchLength);
   const stride = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
   const strideShift = Math.log2(stride);
-  const sampleMask = stride - 1;
   const sampleCount = Math.ceil(N / stride);
   const matchWindow = options.matchWindow ?? matchWindowFor(N);
   if (!Number.isInteger(matchWindow) || matchWindow < 1) {
@@ -67,7 +58,6 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   }
   const matchEnd = N - maxN;
   const bins = histogramBinCount(N);
-  const maxBin = bins - 1;
   const shouldStop = options.shouldStop;
   const captureLevel = options.captureLevel ?? 0;
   if (!Number.isInteger(captureLevel) || captureLevel < 0 || captureLevel > maxN) {
@@ -82,6 +72,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
 
   // Sampled forward paths start unset (NaN) and are completed once the scan ends.
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
+  const pathCounts = new Float64Array(sampleCount * maxN);
 
   let order = new Int32Array(N);
   let next = new Int32Array(N);
@@ -92,229 +83,53 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   const bits = Math.max(1, Math.ceil(Math.log2(alphabetSize)));
   const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
   const packed = perWord > 1;
-  const symbolMask = (1 << bits) - 1;
   let words = new Uint16Array(packed ? N : 0);
   let nextWords = new Uint16Array(packed ? N : 0);
-  const scratch = allocateSymbols(packed ? 0 : N, alphabetSize);
   for (let i = 0; i < N; i++) order[i] = i;
   if (N > 0) order[0] = ~0;
+  const distinctMax = Math.min(alphabetSize, N) + 1;
+  const buffers: RefinementBuffers = {
+    symbols,
+    packed,
+    symbolMask: (1 << bits) - 1,
+    counts: new Int32Array(alphabetSize),
+    touched: new Int32Array(distinctMax),
+    scratch: allocateSymbols(packed ? 0 : N, alphabetSize),
+  };
+  const sample: SampleSink = { mask: stride - 1, shift: strideShift, maxN, forward: paths, counts: pathCounts };
+  const geometry: ReturnGeometry = { N, batchShift, matchWindow, matchEnd };
   let activeLength = N;
-  // Per-symbol counts inside one class, reset through the touched list.
-  const counts = new Int32Array(alphabetSize);
-  const touched = new Int32Array(Math.min(alphabetSize, N) + 1);
-  const sizes = new Int32Array(Math.min(alphabetSize, N) + 1);
 
   const levels: LevelStats[] = [];
   let removedAlive = 0; // positions whose block became unique earlier and still have an n-block
-  let sinceCheck = 0;
   let n = 1;
   for (; n <= maxN && activeLength > 0; n++) {
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-    const offset = n - 1;
-    const positions = N - n + 1;
-    const half = positions >>> 1;
-    const dropPosition = N - n + 1; // its n-block would run past the end
-    const capture = n === captureLevel ? captured : null;
-    const wordShift = (offset % perWord) * bits;
-    const refresh = wordShift === 0;
-    let droppedFromActive = false;
-
-    let classes = 0;
-    let newSingletons = 0;
-    let sumCountLogCount = 0;
-    let forwardObserved = 0;
-    let forwardSumLog = 0;
-    let forwardSumLog2 = 0;
-    let observed = 0;
-    let sumLog = 0;
-    let sumLog2 = 0;
-    let sumLogRc = 0;
-    let sumLogRc2 = 0;
-    let matchCount = 0;
-    const histogram = new Float64Array(bins);
-    // Per batch b: [observed, sum log R, sum (log R)^2, sum log count] at 4b..4b+3, one cache line
-    // per batch instead of four.
-    const batchAcc = new Float64Array(4 * batchCount);
-
-    if (packed && refresh) refreshWords(symbols, offset, bits, perWord, order, activeLength, words, nextWords);
-
-    let out = 0;
-    let s = 0;
-    while (s < activeLength) {
-      // The class is [s, e); its first entry carries the start marker.
-      let e = s + 1;
-      while (e < activeLength && order[e] >= 0) e++;
-      const classEnd = e;
-      let last = order[e - 1];
-      if (last < 0) last = ~last;
-      if (last === dropPosition) {
-        e--;
-        droppedFromActive = true;
-      }
-      // Counting pass: the symbol at offset n-1 of every member.
-      let touchedCount = 0;
-      if (!packed) {
-        for (let k = s; k < e; k++) {
-          let p = order[k];
-          if (p < 0) p = ~p;
-          const sym = symbols[p + offset];
-          scratch[k] = sym;
-          if (counts[sym]++ === 0) touched[touchedCount++] = sym;
-        }
-      } else {
-        for (let k = s; k < e; k++) {
-          const sym = (words[k] >>> wordShift) & symbolMask;
-          if (counts[sym]++ === 0) touched[touchedCount++] = sym;
-        }
-      }
-      // Lay out the surviving subclasses in touched order; unique blocks leave here.
-      let subclasses = 0;
-      let cursor = out;
-      for (let t = 0; t < touchedCount; t++) {
-        const sym = touched[t];
-        const c = counts[sym];
-        if (c >= 2) {
-          counts[sym] = cursor + 1;
-          cursor += c;
-          sizes[subclasses++] = c;
-        } else {
-          counts[sym] = 0;
-        }
-      }
-      // Stable scatter; singletons are recorded as they pass.
-      for (let k = s; k < e; k++) {
-        let p = order[k];
-        if (p < 0) p = ~p;
-        let sym: number;
-        let w = 0;
-        if (packed) {
-          w = words[k];
-          sym = (w >>> wordShift) & symbolMask;
-        } else {
-          sym = scratch[k];
-        }
-        const d = counts[sym];
-        if (d > 0) {
-          next[d - 1] = p;
-          if (packed) nextWords[d - 1] = w;
-          counts[sym] = d + 1;
-        } else {
-          newSingletons++;
-          if ((p & sampleMask) === 0) paths[(p >>> strideShift) * maxN + offset] = -(N - n - p + 1);
-        }
-      }
-      for (let t = 0; t < touchedCount; t++) counts[touched[t]] = 0;
-
-      // Statistics of each surviving subclass; then mark its start. Members are in increasing
-      // position, so each consecutive pair (p, q) gives one return R = q - p: the forward return of p
-      // and the backward return of q. The nearer-history view takes it for p when p < half and for q
-      // when q >= half; both tests flip once along the class, so the branches stay predictable.
-      let a = out;
-      for (let t = 0; t < subclasses; t++) {
-        const c = sizes[t];
-        const b = a + c;
-        const logc = logOfPositive(c);
-        sumCountLogCount += c * logc;
-        classes++;
-        let used = 0;
-        let usedSum = 0;
-        let usedSum2 = 0;
-        let p = next[a];
-        for (let k = a + 1; k < b; k++) {
-          const q = next[k];
-          const R = q - p;
-          const logR = logOfPositive(R);
-          const logR2 = logR * logR;
-          forwardSumLog += logR;
-          forwardSumLog2 += logR2;
-          const batchP = (p >>> batchShift) << 2;
-          batchAcc[batchP + 3] += logc;
-          // How many of p (forward) and q (backward) take this return in the nearer-history view.
-          let weight = 0;
-          if (p < half) {
-            weight = 1;
-            batchAcc[batchP]++;
-            batchAcc[batchP + 1] += logR;
-            batchAcc[batchP + 2] += logR2;
-          }
-          if (q >= half) {
-            weight++;
-            const batchQ = (q >>> batchShift) << 2;
-            batchAcc[batchQ]++;
-            batchAcc[batchQ + 1] += logR;
-            batchAcc[batchQ + 2] += logR2;
-          }
-          if (weight > 0) {
-            let bin = (logR * HISTOGRAM_BINS_PER_NAT) | 0;
-            if (bin > maxBin) bin = maxBin;
-            histogram[bin] += weight;
-            used += weight;
-            usedSum += weight * logR;
-            usedSum2 += weight * logR2;
-          }
-          if (q >= matchWindow && q < matchEnd && R <= matchWindow) matchCount++;
-          if ((p & sampleMask) === 0) paths[(p >>> strideShift) * maxN + offset] = R;
-          if (capture !== null) capture[p] = R;
-          p = q;
-        }
-        // p is now the last member: its forward return is censored.
-        batchAcc[((p >>> batchShift) << 2) + 3] += logc;
-        if ((p & sampleMask) === 0) paths[(p >>> strideShift) * maxN + offset] = -(N - n - p + 1);
-        forwardObserved += c - 1;
-        observed += used;
-        sumLog += usedSum;
-        sumLog2 += usedSum2;
-        // sum of (log R + log c) and of its square over the used returns of this class
-        sumLogRc += usedSum + used * logc;
-        sumLogRc2 += usedSum2 + 2 * logc * usedSum + used * logc * logc;
-        next[a] = ~next[a];
-        a = b;
-      }
-      out = cursor;
-
-      sinceCheck += classEnd - s;
-      s = classEnd;
-      if (sinceCheck >= POLL_EVERY) {
-        sinceCheck = 0;
-        if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-      }
-    }
-    if (!droppedFromActive && n >= 2) removedAlive--; // the dropped position had become unique before
-    const batchObserved = new Float64Array(batchCount);
-    const batchSumLog = new Float64Array(batchCount);
-    const batchSumLog2 = new Float64Array(batchCount);
-    const batchSumLogCount = new Float64Array(batchCount);
-    for (let b = 0; b < batchCount; b++) {
-      batchObserved[b] = batchAcc[4 * b];
-      batchSumLog[b] = batchAcc[4 * b + 1];
-      batchSumLog2[b] = batchAcc[4 * b + 2];
-      batchSumLogCount[b] = batchAcc[4 * b + 3];
-    }
-    const singletons = removedAlive + newSingletons;
-    removedAlive += newSingletons;
-    const level: LevelStats = {
-      n,
-      positions,
-      distinctBlocks: classes + singletons,
-      singletons,
-      sumCountLogCount,
-      forwardObserved,
-      forwardSumLog,
-      forwardSumLog2,
-      observed,
-      sumLog,
-      sumLog2,
-      sumLogRc,
-      sumLogRc2,
-      histogram,
-      matchCount,
-      batchObserved,
-      batchSumLog,
-      batchSumLog2,
-      batchSumLogCount,
+    const wordShift = ((n - 1) % perWord) * bits;
+    if (packed && wordShift === 0) refreshWords(symbols, n - 1, bits, perWord, order, activeLength, words, nextWords);
+    const split = partitionLevel(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
+    const sums: LevelSums = {
+      classes: 0,
+      sumCountLogCount: 0,
+      forwardObserved: 0,
+      forwardSumLog: 0,
+      forwardSumLog2: 0,
+      observed: 0,
+      sumLog: 0,
+      sumLog2: 0,
+      sumLogRc: 0,
+      sumLogRc2: 0,
+      matchCount: 0,
+      batches: new Float64Array(4 * batchCount),
+      histogram: new Float64Array(bins),
     };
+    collectReturns(next, split.active, n, geometry, sample, n === captureLevel ? captured : null, sums);
+    if (!split.droppedFromActive && n >= 2) removedAlive--; // the dropped position had become unique before
+    const singletons = removedAlive + split.newSingletons;
+    removedAlive += split.newSingletons;
+    const level = levelFromSums(n, N - n + 1, sums, singletons, batchCount);
     levels.push(level);
-    activeLength = out;
+    activeLength = split.active;
     const swap = order;
     order = next;
     next = swap;
@@ -340,7 +155,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     batchCount,
     matchWindow,
     matchPositions: Math.max(0, matchEnd - matchWindow),
-    paths: completePaths(paths, N, maxN, stride, sampleCount),
+    paths: completePaths(paths, pathCounts, N, maxN, stride, sampleCount),
     exhausted,
     captured,
   };
@@ -402,16 +217,63 @@ function uniqueLevel(n: number, positions: number, bins: number, batchCount: num
   };
 }
 
-/** Entries never reached were unique blocks (censored) or lie past the end (0). */
-function completePaths(paths: Float64Array, N: number, maxN: number, stride: number, sampleCount: number): SampledPaths {
+/** Entries never reached were unique blocks (censored, count 1) or lie past the end (0). */
+function completePaths(
+  paths: Float64Array,
+  counts: Float64Array,
+  N: number,
+  maxN: number,
+  stride: number,
+  sampleCount: number,
+): SampledPaths {
   const positions = new Int32Array(sampleCount);
   for (let s = 0; s < sampleCount; s++) {
     const p = s * stride;
     positions[s] = p;
     for (let n = 1; n <= maxN; n++) {
       const k = s * maxN + n - 1;
-      if (Number.isNaN(paths[k])) paths[k] = p <= N - n ? -(N - n - p + 1) : 0;
+      if (Number.isNaN(paths[k])) {
+        const inside = p <= N - n;
+        paths[k] = inside ? -(N - n - p + 1) : 0;
+        counts[k] = inside ? 1 : 0;
+      }
     }
   }
-  return { positions, forward: paths, maxN };
+  return { positions, forward: paths, counts, maxN };
+}
+
+/** One level's LevelStats from its sums; the batch sums are laid out one array per quantity. */
+function levelFromSums(n: number, positions: number, sums: LevelSums, singletons: number, batchCount: number): LevelStats {
+  const batchObserved = new Float64Array(batchCount);
+  const batchSumLog = new Float64Array(batchCount);
+  const batchSumLog2 = new Float64Array(batchCount);
+  const batchSumLogCount = new Float64Array(batchCount);
+  const acc = sums.batches;
+  for (let b = 0; b < batchCount; b++) {
+    batchObserved[b] = acc[4 * b];
+    batchSumLog[b] = acc[4 * b + 1];
+    batchSumLog2[b] = acc[4 * b + 2];
+    batchSumLogCount[b] = acc[4 * b + 3];
+  }
+  return {
+    n,
+    positions,
+    distinctBlocks: sums.classes + singletons,
+    singletons,
+    sumCountLogCount: sums.sumCountLogCount,
+    forwardObserved: sums.forwardObserved,
+    forwardSumLog: sums.forwardSumLog,
+    forwardSumLog2: sums.forwardSumLog2,
+    observed: sums.observed,
+    sumLog: sums.sumLog,
+    sumLog2: sums.sumLog2,
+    sumLogRc: sums.sumLogRc,
+    sumLogRc2: sums.sumLogRc2,
+    histogram: sums.histogram,
+    matchCount: sums.matchCount,
+    batchObserved,
+    batchSumLog,
+    batchSumLog2,
+    batchSumLogCount,
+  };
 }
