@@ -39,7 +39,7 @@ describe('normalQuantilePlot', () => {
     const inside = new Float64Array(m);
     for (let k = 0; k < r; k++) {
       const x = normalSample(stream, m).sort();
-      for (let i = 0; i < m; i++) if (x[i]! >= band.lower[i]! && x[i]! <= band.upper[i]!) inside[i]++;
+      for (let i = 0; i < m; i++) if (x[i]! >= band.lower[i]! && x[i]! <= band.upper[i]!) inside[i] = inside[i]! + 1;
     }
     const tol = 4 * Math.sqrt((0.95 * 0.05) / r);
     for (let i = 0; i < m; i++) expect(Math.abs(inside[i]! / r - 0.95)).toBeLessThan(tol);
