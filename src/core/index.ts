@@ -45,6 +45,27 @@ export { capturedReturnsCsv } from './result/returnsCsv';
 export { entropyFromNats, varianceFromNats, rateUnitLabel, varianceUnitLabel } from './estimate/units';
 export { EULER_GAMMA, LOG_EXPONENTIAL_VARIANCE } from './estimate/exponentialLaw';
 
+// Fluctuations against N(0,1) and the return law against Exp(1)
+export { normalizedFluctuations } from './estimate/normalizedFluctuations';
+export type { NormalizedFluctuations } from './estimate/normalizedFluctuations';
+export { kolmogorovSmirnovPValue, kolmogorovLimitSurvival } from './estimate/kolmogorovSmirnovPValue';
+export type { KolmogorovPValue, KolmogorovMethod } from './estimate/kolmogorovSmirnovPValue';
+export { andersonDarlingPValue, andersonDarlingLimitCdf } from './estimate/andersonDarlingPValue';
+export { kolmogorovSmirnovNormal } from './estimate/kolmogorovSmirnovNormal';
+export type { KolmogorovSmirnovResult } from './estimate/kolmogorovSmirnovNormal';
+export { andersonDarlingNormal } from './estimate/andersonDarlingNormal';
+export type { AndersonDarlingResult } from './estimate/andersonDarlingNormal';
+export { normalFitTests, DEPENDENCE_CAVEAT } from './estimate/normalFitTests';
+export type { NormalFitTests } from './estimate/normalFitTests';
+export { normalQuantilePlot } from './estimate/normalQuantilePlot';
+export type { NormalQuantilePlot, NormalQuantilePlotOptions } from './estimate/normalQuantilePlot';
+export { normalHistogram } from './estimate/normalHistogram';
+export type { NormalHistogram, NormalHistogramOptions, BinRule } from './estimate/normalHistogram';
+export { kaplanMeier, kaplanMeierAt, kaplanMeierIndex, kaplanMeierMean } from './estimate/kaplanMeier';
+export type { KaplanMeierCurve, RestrictedMean } from './estimate/kaplanMeier';
+export { returnLaw, RETURN_LAW_CAVEAT } from './estimate/returnLaw';
+export type { ReturnLaw, ReturnLawOptions } from './estimate/returnLaw';
+
 // Reference sources
 export type { ReferenceSource, SourceFacts, DetailedSample } from './sources/referenceSource';
 export { sourceCatalog, parseSourceSpec, SOURCE_SPEC_FORMS } from './sources/catalog';
