@@ -15,6 +15,10 @@ export interface ProgressView {
   readonly timeLeft: string | null;
 }
 
+function timeLeftText(seconds: number): string {
+  return seconds < 1 ? 'less than 1 s left' : `about ${formatDuration(seconds)} left`;
+}
+
 /** The progress area's text and bar for the current run phase, at clock time nowMs. */
 export function progressView(run: RunPhase, nowMs: number = Date.now()): ProgressView {
   if (run.status === 'idle') return { status: 'Idle', detail: run.note ?? 'Ready.', value: 0, max: 1, elapsed: null, timeLeft: null };
@@ -50,6 +54,6 @@ export function progressView(run: RunPhase, nowMs: number = Date.now()): Progres
     max: run.maxN,
     elapsed,
         // The estimate was made at the last report; count it down since then.
-    timeLeft: left === null || track === null ? 'time left: estimating…' : `about ${formatDuration(Math.max(0, left - (nowMs - track.lastAtMs) / 1000))} left`,
+    timeLeft: left === null || track === null ? 'time left: estimating…' : timeLeftText(Math.max(0, left - (nowMs - track.lastAtMs) / 1000)),
   };
 }
