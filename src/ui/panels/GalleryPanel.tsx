@@ -51,22 +51,24 @@ export function GalleryPanel() {
                 <span className={item.invented ? 'tag tag-invented' : 'tag'}>{item.badge}</span>
               </div>
               <p className="gallery-story">{item.story}</p>
-              <p className="gallery-facts">
-                <span>
-                  h = <span data-testid={`gallery-h-${item.id}`}>{item.entropy}</span>
-                </span>
-                <span>σ² = {item.sigma2}</span>
-              </p>
-              <button
-                type="button"
-                className="secondary small"
-                aria-pressed={selected}
-                aria-label={`Choose ${item.title}`}
-                title={item.description}
-                onClick={() => runner.chooseDemo(item.id)}
-              >
-                {selected ? 'Chosen' : 'Choose'}
-              </button>
+              <div className="gallery-foot">
+                <p className="gallery-facts">
+                  <span>
+                    h = <span data-testid={`gallery-h-${item.id}`}>{item.entropy}</span>
+                  </span>
+                  <span>σ² = {item.sigma2}</span>
+                </p>
+                <button
+                  type="button"
+                  className="secondary small"
+                  aria-pressed={selected}
+                  aria-label={`Choose ${item.title}`}
+                  title={item.description}
+                  onClick={() => runner.chooseDemo(item.id)}
+                >
+                  {selected ? 'Chosen' : 'Choose'}
+                </button>
+              </div>
             </li>
           );
         })}
