@@ -5,6 +5,8 @@ import react from '@vitejs/plugin-react';
 export default defineConfig({
   plugins: [react()],
   worker: { format: 'es' },
+  // `npm start` prints the address and opens nothing: machines without a desktop browser must not fail.
+  server: { open: false },
   build: { target: 'es2022', sourcemap: true },
   test: {
     include: ['test/**/*.test.ts', 'test/**/*.test.tsx'],

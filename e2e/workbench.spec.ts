@@ -81,7 +81,10 @@ test('(b) a chosen file is read and analysed', async ({ page }) => {
   const errors = collectErrors(page);
   const file = tempFile('two-state-chain.txt', twoStateChainText(CHAIN_LENGTH, CHAIN_STAY, CHAIN_SEED));
   await page.goto('/');
+  await waitForEstimateOf(page, 'Hill-top station wind sectors (invented)');
   await page.getByLabel('Choose a sequence file').setInputFiles(file);
+  await expect(page.getByTestId('preview-format')).toContainText('Reading as characters');
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   await waitForEstimateOf(page, 'two-state-chain.txt');
   await expect(page.locator('.summary')).toContainText('100,000 symbols · alphabet of 2 · read as chars');
   await screenshot(page, 'b-file');
@@ -93,7 +96,10 @@ test('(b) the page and the command line give the same headline estimate', async 
   const file = tempFile('two-state-chain.txt', twoStateChainText(CHAIN_LENGTH, CHAIN_STAY, CHAIN_SEED));
   const cli = run('npx', ['tsx', CLI, 'analyze', file, '--json', '-'], { cwd: ROOT, maxBuffer: 1 << 28 });
   await page.goto('/');
+  await waitForEstimateOf(page, 'Hill-top station wind sectors (invented)');
   await page.getByLabel('Choose a sequence file').setInputFiles(file);
+  await expect(page.getByTestId('preview')).toBeVisible();
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   await waitForEstimateOf(page, 'two-state-chain.txt');
   const fromPage = await headlineEstimate(page);
   const { stdout } = await cli;
@@ -112,6 +118,9 @@ test('(c) a CSV file without the chosen column gives a message that names the pr
   await page.getByRole('combobox', { name: 'Format' }).selectOption('csv');
   await page.getByRole('textbox', { name: 'CSV column' }).fill('direction');
   await page.getByLabel('Choose a sequence file').setInputFiles(file);
+  // The preview already names the problem; the run then refuses the file with the same words.
+  await expect(page.getByRole('list', { name: 'Problems found in the preview' })).toContainText("no column 'direction'");
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   const alert = page.getByRole('alert');
   await expect(alert).toContainText('Could not read “station-log.csv”');
   await expect(alert).toContainText("no column 'direction'");
@@ -131,7 +140,7 @@ test('(d) cancel stops a long run, and the next run completes', async ({ page })
   await waitForEstimateOf(page, 'Hill-top station wind sectors (invented)');
   const symbols = page.getByRole('spinbutton', { name: 'Symbols' });
   await symbols.fill('3000000');
-  await page.getByRole('button', { name: 'Run demo' }).click();
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   await expect(page.getByTestId('run-status')).toHaveText('Running');
   // Cancel at once: the whole 3e6-symbol run takes only a few seconds, so waiting would race it.
   await page.screenshot({ path: join(SCREENSHOTS, 'd-running.png') });
@@ -143,7 +152,7 @@ test('(d) cancel stops a long run, and the next run completes', async ({ page })
   await expect(page.getByText('A new run is in progress')).toHaveCount(0);
 
   await symbols.fill('150000');
-  await page.getByRole('button', { name: 'Run demo' }).click();
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   await expect(page.locator('.summary')).toContainText('150,000 symbols', { timeout: 20_000 });
   await waitForEstimateOf(page, 'Hill-top station wind sectors (invented)');
   await screenshot(page, 'd-after-cancel');

@@ -12,6 +12,8 @@ export type { DigestingReader } from './sequence/digestingReader';
 export type { InputFormat, ReaderOptions, ReadResult, SequenceReader, FastaRecord, ReadWarning } from './sequence/sequenceReader';
 export { guessFormat, SNIFF_BYTES } from './sequence/guessFormat';
 export { recordSequences } from './sequence/recordSequences';
+export { previewHead, PREVIEW_BYTES, PREVIEW_LINES, PREVIEW_LINE_CHARS, PREVIEW_SYMBOLS_LISTED } from './sequence/previewHead';
+export type { HeadPreview, PreviewIssue, PreviewOptions } from './sequence/previewHead';
 
 // The return-time engine
 export { scanReturns, ScanCancelled } from './returns/scanReturns';

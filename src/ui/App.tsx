@@ -1,8 +1,10 @@
 import { useEffect } from 'react';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
+import { GalleryPanel } from './panels/GalleryPanel';
 import { InputPanel } from './panels/InputPanel';
 import { LengthTablePanel } from './panels/LengthTablePanel';
+import { PreviewPanel } from './panels/PreviewPanel';
 import { RunPanel } from './panels/RunPanel';
 import { SettingsPanel } from './panels/SettingsPanel';
 import { SummaryPanel } from './panels/SummaryPanel';
@@ -31,8 +33,14 @@ export function App() {
           <ErrorBoundary name="Settings">
             <SettingsPanel />
           </ErrorBoundary>
+          <ErrorBoundary name="Demo gallery">
+            <GalleryPanel />
+          </ErrorBoundary>
         </div>
         <div className="column wide">
+          <ErrorBoundary name="Preview">
+            <PreviewPanel />
+          </ErrorBoundary>
           <ErrorBoundary name="Estimate">
             <SummaryPanel />
           </ErrorBoundary>

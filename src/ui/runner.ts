@@ -1,30 +1,38 @@
-import { SNIFF_BYTES } from '../core';
+import { PREVIEW_BYTES, previewHead, SNIFF_BYTES } from '../core';
 import type { AnalysisResult, AnalysisSettings } from '../core';
+import { demoScenario } from '../../workers/demoScenarios';
 import type { AnalysisClient, AnalysisProgress } from './analysisClient';
 import { createAnalysisClient } from './analysisClient';
 import { DEFAULT_DEMO } from './store/inputSlice';
-import { readerOptionsFor } from './view/inputOptions';
+import { previewOptionsFor, readerOptionsFor } from './view/inputOptions';
 import { appStore, bindActions } from './store/store';
 import type { StoreHandle } from './store/store';
 
-/** Starts and stops analyses; the only code that talks to the analysis client. */
+/** Chooses inputs, previews files and starts and stops analyses; the only code that talks to the analysis client. */
 export interface Runner {
-  /** Reads and analyses a file with the current format choice and settings. */
-  runFile(file: File): Promise<void>;
-  /** Generates and analyses the demo with the current demo length. */
-  runDemo(): Promise<void>;
-  /** Runs the last chosen input again (the demo when none was chosen) with the current settings. */
-  rerun(): Promise<void>;
+  /** Makes the file the next run's input and previews its head with the current reading choices; nothing runs yet. */
+  openFile(file: File): Promise<void>;
+  /** Previews the open file's head again, after the reading choices changed. */
+  refreshPreview(): void;
+  /** Makes a gallery entry the next run's input, at the current demo length and the entry's seed. */
+  chooseDemo(id: string): void;
+  /** Runs the chosen input with the current settings (the default demo when nothing is chosen). */
+  run(): Promise<void>;
   /** Stops the running analysis, if any. */
   cancel(): void;
 }
 
 type Call = (signal: AbortSignal, onProgress: (p: AnalysisProgress) => void, settings: AnalysisSettings) => Promise<AnalysisResult>;
 
+function errorMessage(error: unknown): string {
+  return error instanceof Error ? error.message : String(error);
+}
+
 export function createRunner(client: AnalysisClient, store: StoreHandle): Runner {
   const actions = bindActions(store);
   let controller: AbortController | null = null;
-  let lastFile: File | null = null;
+  let file: File | null = null;
+  let head: Uint8Array | null = null;
 
   const execute = async (label: string, call: Call): Promise<void> => {
     controller?.abort();
@@ -43,29 +51,67 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     }
   };
 
-  const runFile = (file: File): Promise<void> => {
-    lastFile = file;
-    actions.chooseInput({ kind: 'file', name: file.name, bytes: file.size });
-    const { format, csvColumn } = store.getState();
-    return execute(`“${file.name}”`, async (signal, onProgress, settings) => {
-      const head = format === 'auto' ? await file.slice(0, SNIFF_BYTES).text() : '';
-      const options = { ...readerOptionsFor(file.name, head, format, csvColumn), name: file.name };
-      return client.analyzeFile(file, options, settings, { signal, onProgress });
+  const refreshPreview = (): void => {
+    if (file === null || head === null) return;
+    try {
+      const model = previewHead(head, file.size, file.name, previewOptionsFor(store.getState().reading));
+      actions.showPreview({ kind: 'ready', name: file.name, model });
+    } catch (error) {
+      actions.showPreview({ kind: 'failed', name: file.name, message: errorMessage(error) });
+    }
+  };
+
+  const openFile = async (chosen: File): Promise<void> => {
+    file = chosen;
+    head = null;
+    actions.chooseInput({ kind: 'file', name: chosen.name, bytes: chosen.size });
+    actions.showPreview(null);
+    try {
+      const bytes = new Uint8Array(await chosen.slice(0, PREVIEW_BYTES).arrayBuffer());
+      if (file !== chosen) return; // another file was opened meanwhile
+      head = bytes;
+      refreshPreview();
+    } catch (error) {
+      if (file === chosen) actions.showPreview({ kind: 'failed', name: chosen.name, message: `the file could not be read: ${errorMessage(error)}` });
+    }
+  };
+
+  const runFile = (f: File): Promise<void> => {
+    const { reading } = store.getState();
+    return execute(`“${f.name}”`, async (signal, onProgress, settings) => {
+      const text = reading.format === 'auto' ? await f.slice(0, SNIFF_BYTES).text() : '';
+      const options = { ...readerOptionsFor(f.name, text, reading), name: f.name };
+      return client.analyzeFile(f, options, settings, { signal, onProgress });
     });
   };
 
-  const runDemo = (): Promise<void> => {
-    const length = store.getState().demoLength;
-    const { id, seed } = DEFAULT_DEMO;
-    lastFile = null;
-    actions.chooseInput({ kind: 'demo', id, length, seed });
-    return execute('the invented demo', (signal, onProgress, settings) => client.analyzeDemo(id, length, seed, settings, { signal, onProgress }));
+  const chooseDemo = (id: string): void => {
+    const { seed } = demoScenario(id);
+    file = null;
+    head = null;
+    actions.chooseInput({ kind: 'demo', id, length: store.getState().demoLength, seed });
+  };
+
+  const runDemo = (id: string, length: number, seed: number): Promise<void> => {
+    const { title } = demoScenario(id);
+    return execute(title, (signal, onProgress, settings) => client.analyzeDemo(id, length, seed, settings, { signal, onProgress }));
   };
 
   return {
-    runFile,
-    runDemo,
-    rerun: () => (lastFile !== null && store.getState().chosen?.kind === 'file' ? runFile(lastFile) : runDemo()),
+    openFile,
+    refreshPreview,
+    chooseDemo,
+    run: () => {
+      const { chosen, demoLength } = store.getState();
+      if (chosen?.kind === 'file' && file !== null) return runFile(file);
+      if (chosen?.kind === 'demo') {
+        // The demo length may have changed since the entry was chosen; the run uses the current one.
+        actions.chooseInput({ ...chosen, length: demoLength });
+        return runDemo(chosen.id, demoLength, chosen.seed);
+      }
+      chooseDemo(DEFAULT_DEMO.id);
+      return runDemo(DEFAULT_DEMO.id, demoLength, DEFAULT_DEMO.seed);
+    },
     cancel: () => controller?.abort(),
   };
 }
@@ -73,8 +119,8 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
 /** The page's runner; its worker starts on the first run. */
 export const runner = createRunner(createAnalysisClient(), appStore);
 
-/** On first load (nothing saved from an earlier visit) the page opens with the demo. */
+/** On first load (nothing saved from an earlier visit) the page opens with the default demo, run. */
 export function openDemoIfEmpty(r: Runner = runner, store: StoreHandle = appStore): void {
   const { result, run } = store.getState();
-  if (result === null && run.status === 'idle') void r.runDemo();
+  if (result === null && run.status === 'idle') void r.run();
 }

@@ -3,6 +3,7 @@ import type { AnalysisResult } from '../../src/core/result/analysisResult';
 import type { AnalysisClient, CallOptions } from '../../src/ui/analysisClient';
 import { createRunner, openDemoIfEmpty } from '../../src/ui/runner';
 import { DEFAULT_DEMO } from '../../src/ui/store/inputSlice';
+import { DEMO_SCENARIOS } from '../../workers/demoScenarios';
 import { fakeResult } from './fixtures';
 import { testStore } from './store/testStore';
 
@@ -34,12 +35,12 @@ function fakeClient() {
 const tick = (): Promise<void> => new Promise((resolve) => setTimeout(resolve, 0));
 
 describe('runner', () => {
-  it('runDemo passes the demo id, length, seed and settings, forwards progress and stores the result', async () => {
+  it('run with nothing chosen generates the default demo at the current length, forwards progress and stores the result', async () => {
     const s = testStore();
     const { client, calls } = fakeClient();
     const runner = createRunner(client, s.store);
     s.setDemoLength(5_000);
-    const done = runner.runDemo();
+    const done = runner.run();
     await tick();
     const call = calls[0];
     expect(call?.args).toEqual([DEFAULT_DEMO.id, 5_000, DEFAULT_DEMO.seed, s.store.getState().settings]);
@@ -52,15 +53,42 @@ describe('runner', () => {
     expect(s.store.getState().chosen).toEqual({ kind: 'demo', id: DEFAULT_DEMO.id, length: 5_000, seed: DEFAULT_DEMO.seed });
   });
 
-  it('runFile guesses the format from the file and hands the CSV column to the reader', async () => {
+  it('chooseDemo picks a gallery entry with its own seed; run generates it', async () => {
     const s = testStore();
     const { client, calls } = fakeClient();
     const runner = createRunner(client, s.store);
-    s.setCsvColumn('2');
-    const file = new File(['a,b,c\n1,2,3\n'], 'log.csv');
-    const done = runner.runFile(file);
+    const entry = DEMO_SCENARIOS.find((d) => d.id === 'stirred-tank');
+    runner.chooseDemo('stirred-tank');
+    expect(calls).toHaveLength(0);
+    void runner.run();
     await tick();
-    expect(calls[0]?.args[1]).toEqual({ format: 'csv', column: 2, name: 'log.csv' });
+    expect(calls[0]?.args.slice(0, 3)).toEqual(['stirred-tank', DEFAULT_DEMO.length, entry?.seed]);
+  });
+
+  it('openFile previews the head without running; changed reading choices refresh the preview', async () => {
+    const s = testStore();
+    const { client, calls } = fakeClient();
+    const runner = createRunner(client, s.store);
+    await runner.openFile(new File(['N NE E\nSE S SW\n'], 'wind.txt'));
+    const first = s.store.getState().preview;
+    expect(calls).toHaveLength(0);
+    expect(first?.kind === 'ready' && [first.model.format, first.model.symbolsInHead]).toEqual(['tokens', 6]);
+    s.updateReading({ format: 'chars' });
+    runner.refreshPreview();
+    const second = s.store.getState().preview;
+    // by hand: N N E E S E S S W = 9 characters without the spaces
+    expect(second?.kind === 'ready' && [second.model.format, second.model.symbolsInHead]).toEqual(['chars', 9]);
+  });
+
+  it('run reads the open file with the reading choices: the guessed format and the CSV column', async () => {
+    const s = testStore();
+    const { client, calls } = fakeClient();
+    const runner = createRunner(client, s.store);
+    s.updateReading({ csvColumn: '2' });
+    await runner.openFile(new File(['a,b,c\n1,2,3\n'], 'log.csv'));
+    const done = runner.run();
+    await tick();
+    expect(calls[0]?.args[1]).toEqual({ format: 'csv', column: 2, hasHeader: true, name: 'log.csv' });
     calls[0]?.reject(new Error('bad'));
     await done;
     expect(s.store.getState().failure).toEqual({ title: 'The analysis of “log.csv” failed', message: 'bad' });
@@ -70,7 +98,7 @@ describe('runner', () => {
     const s = testStore();
     const { client } = fakeClient();
     const runner = createRunner(client, s.store);
-    const done = runner.runDemo();
+    const done = runner.run();
     await tick();
     runner.cancel();
     await done;
@@ -83,9 +111,9 @@ describe('runner', () => {
     const s = testStore();
     const { client, calls } = fakeClient();
     const runner = createRunner(client, s.store);
-    const first = runner.runDemo();
+    const first = runner.run();
     await tick();
-    const second = runner.runDemo();
+    const second = runner.run();
     await tick();
     expect(calls[0]?.call.signal.aborted).toBe(true);
     expect(calls[1]?.call.signal.aborted).toBe(false);
@@ -96,18 +124,19 @@ describe('runner', () => {
     expect(s.store.getState().run).toEqual({ status: 'idle', note: null });
   });
 
-  it('rerun repeats the last file, or runs the demo when none was chosen', async () => {
+  it('run repeats the open file until a demo is chosen', async () => {
     const s = testStore();
     const { client, calls } = fakeClient();
     const runner = createRunner(client, s.store);
-    void runner.rerun();
+    await runner.openFile(new File(['x y'], 'seq.txt'));
+    void runner.run();
     await tick();
-    expect(calls[0]?.kind).toBe('demo');
-    void runner.runFile(new File(['x y'], 'seq.txt'));
+    void runner.run();
     await tick();
-    void runner.rerun();
+    runner.chooseDemo('dry-wet-days');
+    void runner.run();
     await tick();
-    expect(calls.map((c) => c.kind)).toEqual(['demo', 'file', 'file']);
+    expect(calls.map((c) => c.kind)).toEqual(['file', 'file', 'demo']);
   });
 
   it('openDemoIfEmpty starts the demo only when there is no result and nothing runs', async () => {

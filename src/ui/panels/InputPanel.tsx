@@ -1,41 +1,72 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { DragEvent } from 'react';
 import { runner } from '../runner';
-import { DEMO_LENGTH_RANGE } from '../store/inputSlice';
-import type { FormatChoice } from '../store/inputSlice';
-import { setCsvColumn, setDemoLength, setFormat, useAppState } from '../store/store';
-import { chosenInputText, FORMAT_CHOICES, parseDemoLength } from '../view/inputOptions';
+import type { AmbiguityChoice, FormatChoice, ReadingChoices } from '../store/inputSlice';
+import { updateReading, useAppState } from '../store/store';
+import { AMBIGUITY_CHOICES, FORMAT_CHOICES } from '../view/inputOptions';
 
-function runFirst(files: FileList | null): void {
+function openFirst(files: FileList | null | undefined): void {
   const file = files?.[0];
-  if (file !== undefined) void runner.runFile(file);
+  if (file !== undefined) void runner.openFile(file);
 }
 
-/** Where the sequence comes from: a dropped or chosen file, or the invented demo. */
-export function InputPanel() {
-  const format = useAppState((s) => s.format);
-  const csvColumn = useAppState((s) => s.csvColumn);
-  const demoLength = useAppState((s) => s.demoLength);
-  const chosen = useAppState((s) => s.chosen);
-  const [dragging, setDragging] = useState(false);
-  const [lengthText, setLengthText] = useState(String(demoLength));
-  const lengthValid = parseDemoLength(lengthText) !== null;
+function changeReading(patch: Partial<ReadingChoices>): void {
+  updateReading(patch);
+  runner.refreshPreview();
+}
 
-  const onDragOver = (event: DragEvent): void => {
-    event.preventDefault();
-    setDragging(true);
-  };
-  const onDrop = (event: DragEvent): void => {
-    event.preventDefault();
-    setDragging(false);
-    runFirst(event.dataTransfer.files);
-  };
+function hasFiles(event: { dataTransfer: DataTransfer | null }): boolean {
+  return event.dataTransfer?.types.includes('Files') ?? false;
+}
+
+/**
+ * Files dropped anywhere on the page open like the picker's; without this the browser would
+ * navigate away to show the file. Returns whether a file is being dragged over the page.
+ */
+function usePageDrop(): boolean {
+  const [dragging, setDragging] = useState(false);
+  useEffect(() => {
+    const over = (event: globalThis.DragEvent): void => {
+      if (!hasFiles(event)) return;
+      event.preventDefault();
+      setDragging(true);
+    };
+    const leave = (event: globalThis.DragEvent): void => {
+      // relatedTarget is null only when the pointer leaves the window.
+      if (event.relatedTarget === null) setDragging(false);
+    };
+    const drop = (event: globalThis.DragEvent): void => {
+      if (!hasFiles(event)) return;
+      event.preventDefault();
+      setDragging(false);
+      openFirst(event.dataTransfer?.files);
+    };
+    window.addEventListener('dragover', over);
+    window.addEventListener('dragleave', leave);
+    window.addEventListener('drop', drop);
+    return () => {
+      window.removeEventListener('dragover', over);
+      window.removeEventListener('dragleave', leave);
+      window.removeEventListener('drop', drop);
+    };
+  }, []);
+  return dragging;
+}
+
+/** Where a file comes from (dropped anywhere on the page, or picked) and how it is read. */
+export function InputPanel() {
+  const reading = useAppState((s) => s.reading);
+  const preview = useAppState((s) => s.preview);
+  const dragging = usePageDrop();
+  // Options of the format in use: the chosen one, or the guess the preview made.
+  const shown = reading.format !== 'auto' ? reading.format : preview?.kind === 'ready' ? preview.model.format : 'auto';
+  const onZoneDragOver = (event: DragEvent): void => event.preventDefault();
 
   return (
     <section className="panel" aria-labelledby="input-heading">
       <h2 id="input-heading">Input</h2>
-      <div className={dragging ? 'drop-zone is-dragging' : 'drop-zone'} onDragOver={onDragOver} onDragLeave={() => setDragging(false)} onDrop={onDrop}>
-        <p>Drop a sequence file here</p>
+      <div className={dragging ? 'drop-zone is-dragging' : 'drop-zone'} onDragOver={onZoneDragOver} data-testid="drop-zone">
+        <p>{dragging ? 'Drop the file to preview it' : 'Drop a sequence file anywhere on the page'}</p>
         <label className="file-button">
           Choose a file…
           <input
@@ -43,16 +74,17 @@ export function InputPanel() {
             className="visually-hidden"
             aria-label="Choose a sequence file"
             onChange={(event) => {
-              runFirst(event.currentTarget.files);
+              openFirst(event.currentTarget.files);
               event.currentTarget.value = '';
             }}
           />
         </label>
+        <p className="hint">The file is previewed first; press Run to analyse it.</p>
       </div>
       <div className="field-row">
         <label className="field">
           <span>Format</span>
-          <select value={format} onChange={(event) => setFormat(event.currentTarget.value as FormatChoice)}>
+          <select value={reading.format} onChange={(event) => changeReading({ format: event.currentTarget.value as FormatChoice })}>
             {FORMAT_CHOICES.map((c) => (
               <option key={c.value} value={c.value}>
                 {c.label}
@@ -60,51 +92,60 @@ export function InputPanel() {
             ))}
           </select>
         </label>
-        <label className="field">
-          <span>CSV column</span>
-          <input
-            type="text"
-            value={csvColumn}
-            placeholder="name or index"
-            aria-describedby="csv-column-hint"
-            onChange={(event) => setCsvColumn(event.currentTarget.value)}
-          />
-        </label>
-      </div>
-      <p id="csv-column-hint" className="hint">
-        CSV column: a header name, or a 0-based index. Format and column apply to the next file you choose.
-      </p>
-      <fieldset className="demo">
-        <legend>Demo with invented data</legend>
-        <p className="hint">Hill-top station wind sectors: eight compass sectors from a Markov chain of our own design, not measurements.</p>
-        <div className="field-row">
+        {(shown === 'csv' || shown === 'auto') && (
           <label className="field">
-            <span>Symbols</span>
+            <span>CSV column</span>
             <input
-              type="number"
-              inputMode="numeric"
-              min={DEMO_LENGTH_RANGE[0]}
-              max={DEMO_LENGTH_RANGE[1]}
-              step={1000}
-              value={lengthText}
-              aria-invalid={!lengthValid}
-              onChange={(event) => {
-                const text = event.currentTarget.value;
-                setLengthText(text);
-                const length = parseDemoLength(text);
-                if (length !== null) setDemoLength(length);
-              }}
+              type="text"
+              value={reading.csvColumn}
+              placeholder="name or index"
+              aria-describedby="csv-column-hint"
+              onChange={(event) => changeReading({ csvColumn: event.currentTarget.value })}
             />
           </label>
-          <button type="button" onClick={() => void runner.runDemo()} disabled={!lengthValid}>
-            Run demo
-          </button>
-        </div>
-      </fieldset>
-      <p className="current-input">
-        <span className="muted">Current input: </span>
-        {chosenInputText(chosen)}
-      </p>
+        )}
+      </div>
+      {(shown === 'csv' || shown === 'auto') && (
+        <p id="csv-column-hint" className="hint">
+          CSV column: a header name, or a 0-based index.
+        </p>
+      )}
+      <div className="check-row">
+        {shown === 'csv' && (
+          <label className="check">
+            <input type="checkbox" checked={reading.csvHeader} onChange={(event) => changeReading({ csvHeader: event.currentTarget.checked })} />
+            First row is a header
+          </label>
+        )}
+        {shown === 'chars' && (
+          <label className="check">
+            <input
+              type="checkbox"
+              checked={reading.keepWhitespace}
+              onChange={(event) => changeReading({ keepWhitespace: event.currentTarget.checked })}
+            />
+            Keep spaces and tabs as symbols
+          </label>
+        )}
+        {shown === 'fasta' && (
+          <>
+            <label className="field">
+              <span>Ambiguity codes and gaps</span>
+              <select value={reading.ambiguity} onChange={(event) => changeReading({ ambiguity: event.currentTarget.value as AmbiguityChoice })}>
+                {AMBIGUITY_CHOICES.map((c) => (
+                  <option key={c.value} value={c.value}>
+                    {c.label}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <label className="check">
+              <input type="checkbox" checked={reading.caseFold} onChange={(event) => changeReading({ caseFold: event.currentTarget.checked })} />
+              Read lower case as upper case
+            </label>
+          </>
+        )}
+      </div>
     </section>
   );
 }

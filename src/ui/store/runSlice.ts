@@ -12,7 +12,36 @@ export type RunPhase =
       /** The maxN the run was started with, for the progress bar. */
       readonly maxN: number;
       readonly progress: AnalysisProgress | null;
+      /** Clock time (ms) the run started, for the elapsed time. */
+      readonly startedAtMs: number;
+      /** The scan's level reports so far, for the time-left rule (see view/timeLeft.ts); null before the first. */
+      readonly levels: LevelTrack | null;
     };
+
+/**
+ * The level reports condensed: times of the first and last report, the positions in play after the
+ * last two levels, and the work between the first and the last report (the sum of the positions in
+ * play after each level but the last, since level k+1 works on those left after level k).
+ */
+export interface LevelTrack {
+  readonly firstAtMs: number;
+  readonly lastAtMs: number;
+  readonly active: number;
+  readonly previousActive: number | null;
+  readonly positionLevelsSinceFirst: number;
+}
+
+/** The level track after one more report. */
+export function trackLevel(track: LevelTrack | null, active: number, atMs: number): LevelTrack {
+  if (track === null) return { firstAtMs: atMs, lastAtMs: atMs, active, previousActive: null, positionLevelsSinceFirst: 0 };
+  return {
+    firstAtMs: track.firstAtMs,
+    lastAtMs: atMs,
+    active,
+    previousActive: track.active,
+    positionLevelsSinceFirst: track.positionLevelsSinceFirst + track.active,
+  };
+}
 
 /** A failed run, told in plain words; `message` is the core's message, unchanged. */
 export interface RunFailure {
@@ -52,13 +81,18 @@ export function runActions(store: StoreHandle) {
   };
   return {
     /** Marks a new run as started and returns its id; reports for older ids are ignored from now on. */
-    beginRun(label: string, maxN: number): number {
+    beginRun(label: string, maxN: number, atMs: number = Date.now()): number {
       const id = store.getState().lastRunId + 1;
-      store.setState({ run: { status: 'running', id, label, maxN, progress: null }, failure: null, lastRunId: id });
+      store.setState({ run: { status: 'running', id, label, maxN, progress: null, startedAtMs: atMs, levels: null }, failure: null, lastRunId: id });
       return id;
     },
-    reportProgress(id: number, progress: AnalysisProgress): void {
-      store.setState((s) => (isCurrent(id) && s.run.status === 'running' ? { run: { ...s.run, progress } } : s));
+    /** Stores the latest report; level reports also feed the time-left track. */
+    reportProgress(id: number, progress: AnalysisProgress, atMs: number = Date.now()): void {
+      store.setState((s) => {
+        if (!isCurrent(id) || s.run.status !== 'running') return s;
+        const levels = progress.kind === 'level' ? trackLevel(s.run.levels, progress.active, atMs) : s.run.levels;
+        return { run: { ...s.run, progress, levels } };
+      });
     },
     /** Stores the result (replacing the previous snapshot) and returns to idle. */
     completeRun(id: number, result: AnalysisResult): void {

@@ -3,7 +3,7 @@ import { useStore } from 'zustand';
 import { createJSONStorage, persist } from 'zustand/middleware';
 import type { StateStorage } from 'zustand/middleware';
 import type { StoreApi } from 'zustand/vanilla';
-import { initialInputState, inputActions } from './inputSlice';
+import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
 import { initialResultState, restoreResult, resultActions, resultForStorage } from './resultSlice';
 import type { ResultState } from './resultSlice';
@@ -20,17 +20,23 @@ export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 export const STORAGE_KEY = 'returnrate.workbench';
 const STORAGE_VERSION = 1;
 
-/** The part that survives a reload: settings and the last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState;
+/** The part that survives a reload: settings, reading choices, demo length and the last result (see resultForStorage). */
+export type PersistedState = SettingsState & ResultState & Pick<InputState, 'reading' | 'demoLength'>;
 
 export function persistedPart(state: AppState): PersistedState {
-  return { settings: state.settings, ...resultForStorage(state) };
+  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, ...resultForStorage(state) };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
 export function mergePersisted(stored: unknown, current: AppState): AppState {
   const s = typeof stored === 'object' && stored !== null ? (stored as Partial<Record<keyof PersistedState, unknown>>) : {};
-  return { ...current, settings: restoreSettings(s.settings), ...restoreResult(s) };
+  return {
+    ...current,
+    settings: restoreSettings(s.settings),
+    reading: restoreReading(s.reading),
+    demoLength: restoreDemoLength(s.demoLength),
+    ...restoreResult(s),
+  };
 }
 
 /**
@@ -82,9 +88,9 @@ export function useAppState<T>(selector: (state: AppState) => T): T {
 }
 
 export const {
-  setFormat,
-  setCsvColumn,
+  updateReading,
   setDemoLength,
+  showPreview,
   chooseInput,
   updateSettings,
   resetSettings,

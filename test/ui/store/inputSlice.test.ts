@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_DEMO, DEMO_LENGTH_RANGE } from '../../../src/ui/store/inputSlice';
+import { DEFAULT_DEMO, DEFAULT_READING, DEMO_LENGTH_RANGE, restoreReading } from '../../../src/ui/store/inputSlice';
 import { testStore } from './testStore';
 
 describe('input slice', () => {
   it('starts with the format guessed from the file and the default demo length', () => {
     const { store } = testStore();
-    expect(store.getState().format).toBe('auto');
+    expect(store.getState().reading.format).toBe('auto');
     expect(store.getState().demoLength).toBe(DEFAULT_DEMO.length);
     expect(store.getState().chosen).toBeNull();
   });
@@ -20,12 +20,32 @@ describe('input slice', () => {
     }
   });
 
-  it('setFormat, setCsvColumn and chooseInput replace their fields', () => {
+  it('updateReading and chooseInput replace their fields', () => {
     const s = testStore();
-    s.setFormat('csv');
-    s.setCsvColumn('sector');
+    const before = s.store.getState().reading;
+    s.updateReading({ format: 'csv', csvColumn: 'sector' });
     s.chooseInput({ kind: 'file', name: 'x.csv', bytes: 10 });
     const state = s.store.getState();
-    expect([state.format, state.csvColumn, state.chosen]).toEqual(['csv', 'sector', { kind: 'file', name: 'x.csv', bytes: 10 }]);
+    expect(state.reading).toEqual({ ...DEFAULT_READING, format: 'csv', csvColumn: 'sector' });
+    expect(state.reading).not.toBe(before);
+    expect(state.chosen).toEqual({ kind: 'file', name: 'x.csv', bytes: 10 });
+  });
+
+  it('choosing a demo drops the file preview', () => {
+    const s = testStore();
+    s.showPreview({ kind: 'failed', name: 'x', message: 'gone' });
+    s.chooseInput({ kind: 'file', name: 'x', bytes: 1 });
+    expect(s.store.getState().preview).not.toBeNull();
+    s.chooseInput({ kind: 'demo', id: 'hilltop-wind', length: 1000, seed: 1 });
+    expect(s.store.getState().preview).toBeNull();
+  });
+
+  it('restoreReading keeps valid saved fields and replaces the rest by defaults', () => {
+    expect(restoreReading({ format: 'chars', keepWhitespace: true, ambiguity: 'maybe', csvColumn: 3 })).toEqual({
+      ...DEFAULT_READING,
+      format: 'chars',
+      keepWhitespace: true,
+    });
+    expect(restoreReading(null)).toBe(DEFAULT_READING);
   });
 });

@@ -7,10 +7,22 @@ import { testStore } from './testStore';
 describe('run slice', () => {
   it('beginRun gives each run a new id and starts without progress', () => {
     const s = testStore();
-    const first = s.beginRun('a', 40);
-    const second = s.beginRun('b', 20);
+    const first = s.beginRun('a', 40, 1_000);
+    const second = s.beginRun('b', 20, 2_000);
     expect(second).toBe(first + 1);
-    expect(s.store.getState().run).toEqual({ status: 'running', id: second, label: 'b', maxN: 20, progress: null });
+    expect(s.store.getState().run).toEqual({ status: 'running', id: second, label: 'b', maxN: 20, progress: null, startedAtMs: 2_000, levels: null });
+  });
+
+  it('level reports build the time-left track: first and last time, the last two counts, the work between', () => {
+    const s = testStore();
+    const id = s.beginRun('x', 40, 0);
+    s.reportProgress(id, { kind: 'read', bytes: 10, totalBytes: 20 }, 50);
+    s.reportProgress(id, { kind: 'level', n: 1, active: 1000 }, 100);
+    s.reportProgress(id, { kind: 'level', n: 2, active: 800 }, 300);
+    s.reportProgress(id, { kind: 'level', n: 3, active: 500 }, 460);
+    const { run } = s.store.getState();
+    // by hand: levels 2 and 3 worked on the 1000 and 800 positions left after levels 1 and 2
+    expect(run.status === 'running' && run.levels).toEqual({ firstAtMs: 100, lastAtMs: 460, active: 500, previousActive: 800, positionLevelsSinceFirst: 1800 });
   });
 
   it('reports of an older run are ignored once a newer one started', () => {

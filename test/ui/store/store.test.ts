@@ -1,15 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_SETTINGS } from '../../../src/core/result/analysisResult';
+import { DEFAULT_DEMO, DEFAULT_READING } from '../../../src/ui/store/inputSlice';
 import { STORAGE_KEY, memoryStorage } from '../../../src/ui/store/store';
 import { fakeResult } from '../fixtures';
 import { testStore } from './testStore';
 
 describe('app store persistence', () => {
-  it('settings and the last result survive a reload; input and run state do not', () => {
+  it('settings, reading choices, demo length and the last result survive a reload; chosen input, preview and run state do not', () => {
     const storage = memoryStorage();
     const first = testStore(storage);
     first.updateSettings({ unit: 'bit' });
-    first.setFormat('fasta');
+    first.updateReading({ format: 'fasta', ambiguity: 'symbol' });
+    first.setDemoLength(50_000);
+    first.chooseInput({ kind: 'file', name: 'a.txt', bytes: 3 });
     const result = fakeResult();
     first.completeRun(first.beginRun('x', 40), result);
     first.beginRun('still running', 40);
@@ -17,22 +20,27 @@ describe('app store persistence', () => {
     const reloaded = testStore(storage).store.getState();
     expect(reloaded.settings).toEqual({ ...DEFAULT_SETTINGS, unit: 'bit' });
     expect(reloaded.result).toEqual(result);
-    expect(reloaded.format).toBe('auto');
+    expect(reloaded.reading).toEqual({ ...DEFAULT_READING, format: 'fasta', ambiguity: 'symbol' });
+    expect(reloaded.demoLength).toBe(50_000);
+    expect(reloaded.chosen).toBeNull();
+    expect(reloaded.preview).toBeNull();
     expect(reloaded.run).toEqual({ status: 'idle', note: null });
   });
 
   it('a corrupt saved state gives a fresh page instead of an error', () => {
     const storage = memoryStorage();
-    storage.setItem(STORAGE_KEY, JSON.stringify({ state: { settings: 'x', result: 42 }, version: 1 }));
+    storage.setItem(STORAGE_KEY, JSON.stringify({ state: { settings: 'x', result: 42, reading: { format: 'pdf', csvHeader: 'yes' }, demoLength: -4 }, version: 1 }));
     const state = testStore(storage).store.getState();
     expect(state.settings).toEqual(DEFAULT_SETTINGS);
+    expect(state.reading).toEqual(DEFAULT_READING);
+    expect(state.demoLength).toBe(DEFAULT_DEMO.length);
     expect(state.result).toBeNull();
   });
 
-  it('saves only settings, result and the paths flag', () => {
+  it('saves only settings, reading choices, demo length, result and the paths flag', () => {
     const storage = memoryStorage();
     testStore(storage).updateSettings({ maxN: 7 });
     const saved = JSON.parse(String(storage.getItem(STORAGE_KEY))) as { state: Record<string, unknown> };
-    expect(Object.keys(saved.state).sort()).toEqual(['pathsDropped', 'result', 'settings']);
+    expect(Object.keys(saved.state).sort()).toEqual(['demoLength', 'pathsDropped', 'reading', 'result', 'settings']);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { guessFormat } from '../../../src/core/sequence/guessFormat';
-import { chosenInputText, parseColumn, parseDemoLength, readerOptionsFor } from '../../../src/ui/view/inputOptions';
+import { DEFAULT_READING } from '../../../src/ui/store/inputSlice';
+import { chosenInputText, parseColumn, parseDemoLength, previewOptionsFor, readerOptionsFor } from '../../../src/ui/view/inputOptions';
 
 describe('inputOptions', () => {
   it('guessFormat goes by extension first, then by the longest field in the head of the file', () => {
@@ -25,10 +26,25 @@ describe('inputOptions', () => {
     expect(parseColumn('  ')).toBeUndefined();
   });
 
-  it('readerOptionsFor passes the column only to the CSV reader', () => {
-    expect(readerOptionsFor('a.csv', '', 'auto', 'sector')).toEqual({ format: 'csv', column: 'sector' });
-    expect(readerOptionsFor('a.csv', '', 'auto', '')).toEqual({ format: 'csv' });
-    expect(readerOptionsFor('a.csv', '', 'tokens', 'sector')).toEqual({ format: 'tokens' });
+  it('readerOptionsFor passes each format only its own options', () => {
+    const c = { ...DEFAULT_READING, csvColumn: 'sector', keepWhitespace: true, ambiguity: 'symbol' as const };
+    expect(readerOptionsFor('a.csv', '', c)).toEqual({ format: 'csv', column: 'sector', hasHeader: true });
+    expect(readerOptionsFor('a.csv', '', { ...c, csvColumn: '' })).toEqual({ format: 'csv', hasHeader: true });
+    expect(readerOptionsFor('a.csv', '', { ...c, format: 'tokens' })).toEqual({ format: 'tokens' });
+    expect(readerOptionsFor('a.txt', '0110\n', c)).toEqual({ format: 'chars', keepWhitespace: true });
+    expect(readerOptionsFor('a.fa', '', c)).toEqual({ format: 'fasta', ambiguity: 'symbol', caseFold: true });
+  });
+
+  it('previewOptionsFor sends every option along with auto, so the guessed format finds its own', () => {
+    expect(previewOptionsFor({ ...DEFAULT_READING, csvColumn: '2' })).toEqual({
+      format: 'auto',
+      column: 2,
+      hasHeader: true,
+      keepWhitespace: false,
+      ambiguity: 'skip',
+      caseFold: true,
+    });
+    expect(previewOptionsFor({ ...DEFAULT_READING, format: 'bytes' })).toEqual({ format: 'bytes' });
   });
 
   it('parseDemoLength accepts integers in range only', () => {
@@ -42,5 +58,6 @@ describe('inputOptions', () => {
     expect(chosenInputText(null)).toBe('none yet');
     expect(chosenInputText({ kind: 'file', name: 'a.txt', bytes: 2048 })).toBe('a.txt (2.0 KiB)');
     expect(chosenInputText({ kind: 'demo', id: 'd', length: 200_000, seed: 5 })).toBe('invented demo, 200,000 symbols, seed 5');
+    expect(chosenInputText({ kind: 'demo', id: 'd', length: 1_000, seed: 5 }, (id) => `demo ${id}`)).toBe('demo d, 1,000 symbols, seed 5');
   });
 });

@@ -1,0 +1,81 @@
+import { useMemo } from 'react';
+import { useAppState } from '../store/store';
+import { previewView } from '../view/previewView';
+import type { PreviewView } from '../view/previewView';
+
+function Ready({ view }: { readonly view: Extract<PreviewView, { kind: 'ready' }> }) {
+  return (
+    <>
+      <p className="preview-format" data-testid="preview-format">
+        {view.formatLine}
+      </p>
+      {view.warnings.length > 0 && (
+        <ul className="preview-warnings" aria-label="Problems found in the preview">
+          {view.warnings.map((w) => (
+            <li key={w}>{w}</li>
+          ))}
+        </ul>
+      )}
+      <div className="preview-grid">
+        <figure className="preview-lines">
+          <figcaption>{view.linesCaption}</figcaption>
+          {/* Printed as text (React escapes it); control characters were made visible by the view. */}
+          <pre tabIndex={0} aria-label={view.linesCaption} data-testid="preview-lines">
+            {view.lines.join('\n')}
+          </pre>
+        </figure>
+        <div className="preview-alphabet">
+          <p data-testid="preview-symbols">{view.symbolsLine}</p>
+          {view.alphabet.length > 0 && (
+            <div className="table-scroll small" tabIndex={0} role="region" aria-label="Alphabet of the preview, scrollable">
+              <table className="compact">
+                <caption>{view.alphabetCaption}</caption>
+                <thead>
+                  <tr>
+                    <th scope="col">Symbol</th>
+                    <th scope="col" className="num">
+                      Count
+                    </th>
+                    <th scope="col" className="num">
+                      Share
+                    </th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {view.alphabet.map((row) => (
+                    <tr key={row.symbol}>
+                      <th scope="row" className="symbol">
+                        <span aria-label={row.spoken}>{row.symbol}</span>
+                      </th>
+                      <td className="num">{row.count}</td>
+                      <td className="num">{row.share}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          )}
+        </div>
+      </div>
+    </>
+  );
+}
+
+/** The chosen file's head as the reader sees it, before the run; hidden when no file is open. */
+export function PreviewPanel() {
+  const preview = useAppState((s) => s.preview);
+  const view = useMemo(() => (preview === null ? null : previewView(preview)), [preview]);
+  if (view === null) return null;
+  return (
+    <section className="panel preview" aria-labelledby="preview-heading" data-testid="preview">
+      <h2 id="preview-heading">{view.title}</h2>
+      {view.kind === 'failed' ? (
+        <p className="alert-message" role="alert">
+          {view.message}
+        </p>
+      ) : (
+        <Ready view={view} />
+      )}
+    </section>
+  );
+}
