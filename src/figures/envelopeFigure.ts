@@ -11,33 +11,35 @@ import { readoutNumber, readoutPercent } from './readoutFormat';
 import { legendEntry, STYLES } from './seriesStyle';
 import { trustedSpan } from './trustedSpan';
 
-export interface EnvelopeFigure {
-  readonly figure: Figure;
-  /** Per n, the share of paths outside each band; empty when there is no figure. */
-  readonly exceedance: readonly ExceedanceRow[];
-  /** h and sigma the deviations and bands use, nats; null when the result has none. */
-  readonly hNats: number | null;
-  readonly sigmaNats: number | null;
-}
-
 /**
  * Sampled paths of log R_n(x) − n ĥ against n with the bands ±z σ̂ sqrt(n), ±σ̂ sqrt(2 n log log n)
  * and ±C n^(1/2 − δ) (envelopeBands.ts), and per n the share of paths outside each band.
  * Computed in nats from the result's estimates; drawn in the result's unit.
  * @param options validated envelope options (envelopeOptionProblems is empty)
  */
-export function envelopeFigure(result: AnalysisResult, size: FigureSize, options: EnvelopeOptions): EnvelopeFigure {
+/** h and sigma of a result in nats, the band half-widths per n and the share of paths outside each band. */
+export interface EnvelopeStatistics {
+  readonly hNats: number | null;
+  readonly sigmaNats: number | null;
+  readonly maxN: number;
+  readonly widths: readonly BandWidths[];
+  readonly exceedance: readonly ExceedanceRow[];
+  /** Why there is nothing to show, or null. */
+  readonly problem: string | null;
+}
+
+/** The size-independent part of the envelope figure (also shown as a table). */
+export function envelopeStatistics(result: AnalysisResult, options: EnvelopeOptions): EnvelopeStatistics {
   const unit = result.settings.unit;
   const f = entropyFromNats(1, unit);
   const hNats = Number.isFinite(result.entropy.estimate) ? result.entropy.estimate / f : null;
   const sigma2Nats = Number.isFinite(result.sigma2.estimate) ? Math.max(0, result.sigma2.estimate) / (f * f) : null;
   const sigmaNats = sigma2Nats === null ? null : Math.sqrt(sigma2Nats);
-  const none = (message: string): EnvelopeFigure => ({ figure: { kind: 'unavailable', message }, exceedance: [], hNats, sigmaNats });
+  const maxN = result.lengths.length > 0 ? (result.lengths[result.lengths.length - 1]?.n ?? 0) : (result.paths.logReturn[0]?.length ?? 0);
+  const none = (problem: string): EnvelopeStatistics => ({ hNats, sigmaNats, maxN, widths: [], exceedance: [], problem });
   if (hNats === null) return none('The result has no entropy estimate, so there is no n ĥ to subtract.');
   if (result.paths.logReturn.length === 0) return none('This result has no sampled paths (a large saved result keeps only its summaries): run the analysis again to see them.');
-  const maxN = result.lengths.length > 0 ? (result.lengths[result.lengths.length - 1]?.n ?? 1) : (result.paths.logReturn[0]?.length ?? 1);
   if (maxN < 1) return none('The result has no block lengths to plot.');
-
   const widths: BandWidths[] = [];
   for (let n = 1; n <= maxN; n++) {
     widths.push({
@@ -46,8 +48,26 @@ export function envelopeFigure(result: AnalysisResult, size: FigureSize, options
       errorTerm: errorTermHalfWidth(n, options.errorC, options.delta),
     });
   }
-  const exceedance = envelopeExceedance(result.paths.logReturn, hNats, widths);
+  return { hNats, sigmaNats, maxN, widths, exceedance: envelopeExceedance(result.paths.logReturn, hNats, widths), problem: null };
+}
 
+/**
+ * Sampled paths of log R_n(x) − n ĥ against n with the bands ±z σ̂ sqrt(n), ±σ̂ sqrt(2 n log log n)
+ * and ±C n^(1/2 − δ) (envelopeBands.ts). Computed in nats from the result's estimates; drawn in
+ * the result's unit. The read-out gives per n the share of paths outside each band.
+ * @param options validated envelope options (envelopeOptionProblems is empty)
+ * @param statistics envelopeStatistics(result, options), when the caller has it already
+ */
+export function envelopeFigure(
+  result: AnalysisResult,
+  size: FigureSize,
+  options: EnvelopeOptions,
+  statistics: EnvelopeStatistics = envelopeStatistics(result, options),
+): Figure {
+  const { hNats, sigmaNats, maxN, widths, exceedance, problem } = statistics;
+  if (problem !== null || hNats === null) return { kind: 'unavailable', message: problem ?? 'No entropy estimate.' };
+  const unit = result.settings.unit;
+  const f = entropyFromNats(1, unit);
   const curves = pathCurves(result.paths, (n, v) => (v - n * hNats) * f, maxN);
   const band = (key: keyof BandWidths): BandPoint[] =>
     widths.map((w, i) => {
@@ -117,7 +137,7 @@ export function envelopeFigure(result: AnalysisResult, size: FigureSize, options
     readout,
     notes,
   };
-  return { figure: { kind: 'figure', model }, exceedance, hNats, sigmaNats };
+  return { kind: 'figure', model };
 }
 
 function flat(v: number, maxN: number): CurvePoint[] {
