@@ -1,5 +1,6 @@
 import { entropyFromNats, type AnalysisResult } from '../core';
-import { bandPath, curvePath, type BandPoint, type CurvePoint } from './curvePath';
+import { bandPath, type BandPoint, type CurvePoint } from './curvePath';
+import { lineMark } from './lineMark';
 import type { Figure, FigureSize, LegendEntry, LineMark, ReadoutStop } from './figureModel';
 import { linearAxis, round2 } from './linearAxis';
 import { BAND_OPACITY } from './palette';
@@ -54,22 +55,26 @@ export function convergenceFigure(result: AnalysisResult, size: FigureSize, opti
   const plot = plotArea(size);
   const rateUnit = `${unit}/symbol`;
   const { scale: x, axis: xAxis } = linearAxis([1, maxN], [plot.left, plot.left + plot.width], { label: 'Block length n', unit: '', integer: true }, false);
-  const { scale: y, axis: yAxis } = linearAxis([Math.min(...values), Math.max(...values)], [plot.top + plot.height, plot.top], {
+  // Every plotted quantity is >= 0 in theory (R_n >= 1); tiny negative conditional entropies from
+  // the Miller-Madow correction should not stretch the axis below zero.
+  const top = Math.max(...values);
+  const low = Math.min(...values) < -0.02 * top ? Math.min(...values) : 0;
+  const { scale: y, axis: yAxis } = linearAxis([low, top], [plot.top + plot.height, plot.top], {
     label: 'log R_n / n',
     unit: rateUnit,
   });
 
   const lines: LineMark[] = [
-    { id: 'mean', label: 'Mean log R_n / n', style: STYLES.mean, path: curvePath(mean, x, y) },
-    { id: 'plugin', label: 'Plug-in H_n / n', style: STYLES.pluginRate, path: curvePath(plugin, x, y) },
-    { id: 'conditional', label: 'Conditional H_n − H_(n−1)', style: STYLES.conditional, path: curvePath(conditional, x, y) },
+    lineMark('mean', 'Mean log R_n / n', STYLES.mean, mean, x, y),
+    lineMark('plugin', 'Plug-in H_n / n', STYLES.pluginRate, plugin, x, y),
+    lineMark('conditional', 'Conditional H_n − H_(n−1)', STYLES.conditional, conditional, x, y),
   ];
   const flat = (v: number): CurvePoint[] => [
     { x: 1, y: v },
     { x: maxN, y: v },
   ];
-  if (estimate !== null) lines.push({ id: 'estimate', label: `Estimate ĥ = ${readoutNumber(estimate)}`, style: STYLES.estimate, path: curvePath(flat(estimate), x, y) });
-  if (exact !== null) lines.push({ id: 'exact', label: `Exact h = ${readoutNumber(exact)}`, style: STYLES.exact, path: curvePath(flat(exact), x, y) });
+  if (estimate !== null) lines.push(lineMark('estimate', `Estimate ĥ = ${readoutNumber(estimate)}`, STYLES.estimate, flat(estimate), x, y));
+  if (exact !== null) lines.push(lineMark('exact', `Exact h = ${readoutNumber(exact)}`, STYLES.exact, flat(exact), x, y));
   const bands = [
     { id: 'band-outer', label: '5–95% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(outer, x, y) },
     { id: 'band-inner', label: '25–75% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY * 1.8, path: bandPath(inner, x, y) },

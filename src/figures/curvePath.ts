@@ -52,3 +52,10 @@ export function segmentCount(points: readonly CurvePoint[]): number {
   }
   return count;
 }
+
+/** Pixel positions of the defined points (two decimals), for markers on a line. */
+export function vertexPoints(points: readonly CurvePoint[], x: ScaleLinear<number, number>, y: ScaleLinear<number, number>): { x: number; y: number }[] {
+  const out: { x: number; y: number }[] = [];
+  for (const p of points) if (isDefined(p)) out.push({ x: Math.round(x(p.x) * 100) / 100, y: Math.round(y(p.y) * 100) / 100 });
+  return out;
+}

@@ -1,5 +1,6 @@
 import { entropyFromNats, type AnalysisResult } from '../core';
 import { bandPath, curvePath, type BandPoint, type CurvePoint } from './curvePath';
+import { lineMark } from './lineMark';
 import { envelopeExceedance, type BandWidths, type ExceedanceRow } from './envelopeExceedance';
 import { errorTermHalfWidth, gaussianHalfWidth, iteratedLogHalfWidth, type EnvelopeOptions } from './envelopeBands';
 import type { Figure, FigureModel, FigureSize, LegendEntry, LineMark, ReadoutStop } from './figureModel';
@@ -7,7 +8,7 @@ import { linearAxis, round2 } from './linearAxis';
 import { BAND_OPACITY } from './palette';
 import { pathCurves, pathLayer } from './pathLayer';
 import { plotArea } from './plotArea';
-import { readoutNumber, readoutPercent } from './readoutFormat';
+import { parameterText, readoutNumber, readoutPercent } from './readoutFormat';
 import { legendEntry, STYLES } from './seriesStyle';
 import { trustedSpan } from './trustedSpan';
 
@@ -68,9 +69,14 @@ export function envelopeFigure(
   if (problem !== null || hNats === null) return { kind: 'unavailable', message: problem ?? 'No entropy estimate.' };
   const unit = result.settings.unit;
   const f = entropyFromNats(1, unit);
-  const curves = pathCurves(result.paths, (n, v) => (v - n * hNats) * f, maxN);
+  // Show n up to the last level where some path still has a value (at least 3, where the
+  // iterated-logarithm envelope starts): beyond it every path is censored and nothing is compared.
+  let lastUsed = 0;
+  for (const row of exceedance) if (row.used > 0) lastUsed = row.n;
+  const shownN = Math.min(maxN, Math.max(3, lastUsed));
+  const curves = pathCurves(result.paths, (n, v) => (v - n * hNats) * f, shownN);
   const band = (key: keyof BandWidths): BandPoint[] =>
-    widths.map((w, i) => {
+    widths.slice(0, shownN).map((w, i) => {
       const half = w[key];
       return { x: i + 1, lower: half === null ? null : -half * f, upper: half === null ? null : half * f };
     });
@@ -82,7 +88,7 @@ export function envelopeFigure(
   for (const c of curves) for (const p of c) if (p.y !== null && Number.isFinite(p.y)) values.push(p.y);
   for (const b of [gaussian, lil, error]) for (const p of b) if (p.upper !== null) values.push(p.upper, p.lower as number);
   const plot = plotArea(size);
-  const { scale: x, axis: xAxis } = linearAxis([1, maxN], [plot.left, plot.left + plot.width], { label: 'Block length n', unit: '', integer: true }, false);
+  const { scale: x, axis: xAxis } = linearAxis([1, shownN], [plot.left, plot.left + plot.width], { label: 'Block length n', unit: '', integer: true }, false);
   const { scale: y, axis: yAxis } = linearAxis([Math.min(...values), Math.max(...values)], [plot.top + plot.height, plot.top], {
     label: 'log R_n − n ĥ',
     unit,
@@ -90,16 +96,16 @@ export function envelopeFigure(
   // Envelopes drawn as two curves (upper and lower) in one path; only the Gaussian band is filled.
   const edges = (b: BandPoint[]): string =>
     [curvePath(b.map((p) => ({ x: p.x, y: p.upper })), x, y), curvePath(b.map((p) => ({ x: p.x, y: p.lower })), x, y)].filter((s) => s !== '').join('');
-  const zText = readoutNumber(options.z);
-  const lines: LineMark[] = [{ id: 'zero', label: 'Zero', style: STYLES.zero, path: curvePath(flat(0, maxN), x, y) }];
+  const zText = parameterText(options.z);
+  const lines: LineMark[] = [lineMark('zero', 'Zero', STYLES.zero, flat(0, shownN), x, y)];
   const bands = [];
   if (sigmaNats !== null) {
     bands.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(gaussian, x, y) });
-    lines.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, style: STYLES.gaussianBand, path: edges(gaussian) });
-    lines.push({ id: 'iteratedLog', label: '±σ̂ √(2 n log log n)', style: STYLES.lilEnvelope, path: edges(lil) });
+    lines.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, style: STYLES.gaussianBand, path: edges(gaussian), vertices: [] });
+    lines.push({ id: 'iteratedLog', label: '±σ̂ √(2 n log log n)', style: STYLES.lilEnvelope, path: edges(lil), vertices: [] });
   }
-  const errorLabel = `±${readoutNumber(options.errorC)} n^(1/2 − ${readoutNumber(options.delta)})`;
-  lines.push({ id: 'errorTerm', label: errorLabel, style: STYLES.errorTerm, path: edges(error) });
+  const errorLabel = `±${parameterText(options.errorC)} n^(1/2 − ${parameterText(options.delta)})`;
+  lines.push({ id: 'errorTerm', label: errorLabel, style: STYLES.errorTerm, path: edges(error), vertices: [] });
   const layer = pathLayer(curves, x, y, STYLES.samplePath, `Sampled positions (${curves.length})`);
   const spans = trustedSpan(result, x);
 
@@ -108,7 +114,7 @@ export function envelopeFigure(
   for (const l of lines) if (l.id !== 'zero') legend.push(legendEntry(l.id, l.label, l.id === 'gaussian' ? 'band' : 'line', l.style));
   for (const s of spans) legend.push(legendEntry(s.id, s.label, 'span', null, 'ink'));
 
-  const readout: ReadoutStop[] = exceedance.map((row, i) => ({
+  const readout: ReadoutStop[] = exceedance.slice(0, shownN).map((row, i) => ({
     n: row.n,
     x: round2(x(row.n)),
     rows: [

@@ -48,6 +48,8 @@ export interface LineMark {
   readonly label: string;
   readonly style: SeriesStyle;
   readonly path: string;
+  /** Pixel positions of the data points, where the style puts a marker on them (empty otherwise). */
+  readonly vertices: readonly { readonly x: number; readonly y: number }[];
 }
 
 /** A filled band between a lower and an upper curve, as one closed SVG path per contiguous stretch. */

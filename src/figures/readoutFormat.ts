@@ -12,3 +12,8 @@ export function readoutPercent(fraction: number | null): string {
   if (fraction === null || !Number.isFinite(fraction)) return '—';
   return `${(fraction * 100).toFixed(1)}%`;
 }
+
+/** A user-set parameter as typed, up to four significant digits and without trailing zeros (1.96, 0.25, 1). */
+export function parameterText(value: number): string {
+  return Number.isFinite(value) ? String(Number(value.toPrecision(4))).replace('-', '−') : '—';
+}

@@ -1,5 +1,6 @@
 import { varianceFromNats, type AnalysisResult } from '../core';
-import { curvePath, type CurvePoint } from './curvePath';
+import type { CurvePoint } from './curvePath';
+import { lineMark } from './lineMark';
 import type { Figure, FigureSize, LegendEntry, LineMark, PointMark, ReadoutStop } from './figureModel';
 import { linearAxis, round2 } from './linearAxis';
 import { plotArea } from './plotArea';
@@ -96,10 +97,10 @@ export function varianceGrowthFigure(result: AnalysisResult, size: FigureSize): 
     unit: sq,
   });
 
-  const lines: LineMark[] = extra.map((e) => ({ id: e.id, label: e.label, style: e.style, path: curvePath(e.pts, x, y) }));
+  const lines: LineMark[] = extra.map((e) => lineMark(e.id, e.label, e.style, e.pts, x, y));
   if (fit !== null) {
     const range = fit.from === fit.to ? `n = ${fit.from}` : `n = ${fit.from}–${fit.to}`;
-    lines.push({ id: 'fit', label: `Fitted over ${range}: slope ${readoutNumber(fit.slope)} ${unit}²/symbol`, style: STYLES.fittedLine, path: curvePath(fitted, x, y) });
+    lines.push(lineMark('fit', `Fitted over ${range}: slope ${readoutNumber(fit.slope)} ${unit}²/symbol`, STYLES.fittedLine, fitted, x, y));
   }
   const points: PointMark[] = [
     {

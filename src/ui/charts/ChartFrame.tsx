@@ -100,6 +100,15 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
                 data-mark="line"
               />
             ))}
+            {model.lines.map((l) =>
+              l.style.marker === null || l.vertices.length === 0 ? null : (
+                <g key={`m-${l.id}`} fill={PALETTE[l.style.colour]} stroke="#fff" strokeWidth={0.8} data-mark="markers">
+                  {l.vertices.map((q, i) => (
+                    <path key={i} d={markerPath(l.style.marker ?? 'circle', q.x, q.y, 7)} />
+                  ))}
+                </g>
+              ),
+            )}
             {model.points.map((p) =>
               p.style.marker === null ? null : (
                 <g key={p.id} fill={PALETTE[p.style.colour]} stroke="#fff" strokeWidth={0.8} data-mark="points">
@@ -151,7 +160,7 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
           <dl>
             <div>
               <dt>n</dt>
-              <dd>{stop.n}</dd>
+              <dd data-testid="readout-n">{stop.n}</dd>
             </div>
             {stop.rows.map((r) => (
               <div key={r.id}>

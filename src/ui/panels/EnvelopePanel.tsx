@@ -78,7 +78,7 @@ function EnvelopeView({ result }: { readonly result: AnalysisResult }) {
           </p>
           <div className="table-scroll" tabIndex={0} role="region" aria-label="Share of paths outside each band, by block length, scrollable">
             <table className="compact" data-testid="envelope-table">
-              <caption>Share of sampled paths outside each band, per block length n (paths without a value at n are left out and counted).</caption>
+              <caption>Share of sampled paths outside each band, per block length n up to the last n with a value (paths without a value at n are left out and counted).</caption>
               <thead>
                 <tr>
                   <th scope="col">n</th>
@@ -90,7 +90,7 @@ function EnvelopeView({ result }: { readonly result: AnalysisResult }) {
                 </tr>
               </thead>
               <tbody>
-                {table.exceedance.map((r) => (
+                {table.exceedance.filter((r) => r.used > 0).map((r) => (
                   <tr key={r.n}>
                     <th scope="row" className="num">
                       {r.n}
