@@ -84,7 +84,7 @@ export function convergenceFigure(result: AnalysisResult, size: FigureSize, opti
 
   const legend: LegendEntry[] = [];
   if (layer !== null) legend.push(legendEntry(layer.id, layer.label, 'paths', layer.style));
-  for (const b of bands) legend.push(legendEntry(b.id, b.label, 'band', null, b.colour));
+  for (const b of bands) legend.push(legendEntry(b.id, b.label, 'band', null, b.colour, b.opacity));
   for (const l of lines) legend.push(legendEntry(l.id, l.label, 'line', l.style));
   for (const s of spans) legend.push(legendEntry(s.id, s.label, 'span', null, 'ink'));
 

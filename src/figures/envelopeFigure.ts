@@ -111,7 +111,7 @@ export function envelopeFigure(
 
   const legend: LegendEntry[] = [];
   if (layer !== null) legend.push(legendEntry(layer.id, layer.label, 'paths', layer.style));
-  for (const l of lines) if (l.id !== 'zero') legend.push(legendEntry(l.id, l.label, l.id === 'gaussian' ? 'band' : 'line', l.style));
+  for (const l of lines) if (l.id !== 'zero') legend.push(legendEntry(l.id, l.label, l.id === 'gaussian' ? 'band' : 'line', l.style, undefined, l.id === 'gaussian' ? BAND_OPACITY : null));
   for (const s of spans) legend.push(legendEntry(s.id, s.label, 'span', null, 'ink'));
 
   const readout: ReadoutStop[] = exceedance.slice(0, shownN).map((row, i) => ({

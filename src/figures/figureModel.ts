@@ -96,6 +96,8 @@ export interface LegendEntry {
   readonly kind: LegendKind;
   readonly colour: PaletteName;
   readonly style: SeriesStyle | null;
+  /** Fill opacity of a band's swatch (the band's own); null for other kinds. */
+  readonly opacity: number | null;
 }
 
 export interface ReadoutRow {

@@ -22,6 +22,6 @@ export const STYLES = {
   headlineSlope: { colour: 'lilac', dash: '5 5', width: 1.8, marker: null },
 } as const satisfies Record<string, SeriesStyle>;
 
-export function legendEntry(id: string, label: string, kind: LegendKind, style: SeriesStyle | null, colour?: PaletteName): LegendEntry {
-  return { id, label, kind, style, colour: colour ?? style?.colour ?? 'ink' };
+export function legendEntry(id: string, label: string, kind: LegendKind, style: SeriesStyle | null, colour?: PaletteName, opacity: number | null = null): LegendEntry {
+  return { id, label, kind, style, colour: colour ?? style?.colour ?? 'ink', opacity };
 }

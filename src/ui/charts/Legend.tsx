@@ -6,7 +6,7 @@ function Swatch({ entry }: { readonly entry: LegendEntry }) {
   return (
     <svg width="34" height="14" viewBox="0 0 34 14" aria-hidden="true" className="legend-swatch">
       {entry.kind === 'span' && <rect x="1" y="1" width="32" height="12" fill={colour} opacity={0.08} stroke={colour} strokeOpacity={0.35} />}
-      {entry.kind === 'band' && <rect x="1" y="2" width="32" height="10" fill={colour} opacity={BAND_OPACITY * 1.8} />}
+      {entry.kind === 'band' && <rect x="1" y="2" width="32" height="10" fill={colour} opacity={entry.opacity ?? BAND_OPACITY} />}
       {style !== null && entry.kind !== 'span' && (
         <line x1="2" y1="7" x2="32" y2="7" stroke={PALETTE[style.colour]} strokeWidth={Math.max(style.width, 1.2)} strokeDasharray={style.dash || undefined} />
       )}
