@@ -11,8 +11,10 @@ import { initialRunState, runActions } from './runSlice';
 import type { RunState } from './runSlice';
 import { initialSettingsState, restoreSettings, settingsActions } from './settingsSlice';
 import type { SettingsState } from './settingsSlice';
+import { initialViewState, restoreView, viewActions } from './viewSlice';
+import type { ViewState } from './viewSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
@@ -20,11 +22,12 @@ export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 export const STORAGE_KEY = 'returnrate.workbench';
 const STORAGE_VERSION = 1;
 
-/** The part that survives a reload: settings, reading choices, demo length and the last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState & Pick<InputState, 'reading' | 'demoLength'>;
+/** The part that survives a reload: settings, reading choices, demo length, view options and the
+ * last result (see resultForStorage). */
+export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'>;
 
 export function persistedPart(state: AppState): PersistedState {
-  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, ...resultForStorage(state) };
+  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...resultForStorage(state) };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
@@ -35,6 +38,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
     settings: restoreSettings(s.settings),
     reading: restoreReading(s.reading),
     demoLength: restoreDemoLength(s.demoLength),
+    view: restoreView(s.view),
     ...restoreResult(s),
   };
 }
@@ -45,7 +49,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
  */
 export function createAppStore(storage: () => StateStorage) {
   return createStore<AppState>()(
-    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState }), {
+    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState }), {
       name: STORAGE_KEY,
       version: STORAGE_VERSION,
       storage: createJSONStorage(storage),
@@ -76,7 +80,7 @@ function pageStorage(): StateStorage {
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store) };
 }
 
 /** The page's store. */
@@ -101,4 +105,6 @@ export const {
   failRun,
   dismissFailure,
   clearResult,
+  updateView,
+  resetView,
 } = bindActions(appStore);

@@ -37,10 +37,10 @@ describe('app store persistence', () => {
     expect(state.result).toBeNull();
   });
 
-  it('saves only settings, reading choices, demo length, result and the paths flag', () => {
+  it('saves only settings, reading choices, demo length, view options, result and the paths flag', () => {
     const storage = memoryStorage();
     testStore(storage).updateSettings({ maxN: 7 });
     const saved = JSON.parse(String(storage.getItem(STORAGE_KEY))) as { state: Record<string, unknown> };
-    expect(Object.keys(saved.state).sort()).toEqual(['demoLength', 'pathsDropped', 'reading', 'result', 'settings']);
+    expect(Object.keys(saved.state).sort()).toEqual(['demoLength', 'pathsDropped', 'reading', 'result', 'settings', 'view']);
   });
 });
