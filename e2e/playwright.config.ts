@@ -3,7 +3,8 @@ import { fileURLToPath } from 'node:url';
 import { defineConfig } from '@playwright/test';
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const PORT = 5174;
+// RETURNRATE_E2E_PORT lets two checkouts run their browser tests side by side.
+const PORT = Number(process.env['RETURNRATE_E2E_PORT'] ?? 5174);
 const ON_CI = Boolean(process.env['CI']);
 
 /** Browser tests of the workbench in Debian's chromium (apt-get install chromium), against the vite dev server. */
@@ -22,7 +23,8 @@ export default defineConfig({
     command: `npx vite --host 127.0.0.1 --port ${PORT} --strictPort`,
     cwd: ROOT,
     url: `http://127.0.0.1:${PORT}/`,
-    reuseExistingServer: !ON_CI,
+    // Never reuse a server already on the port: it may belong to another checkout and serve other code.
+    reuseExistingServer: false,
     timeout: 120_000,
     stdout: 'ignore',
     stderr: 'pipe',
