@@ -44,7 +44,7 @@ function parseArgs(argv: readonly string[]): Args {
 }
 
 /** Short keys for the catalog entries, in catalog order. */
-const KEYS = ['coin', 'bernoulli', 'two-state', 'three-state', 'golden', 'cf', 'renewal'];
+const KEYS = ['coin', 'bernoulli', 'two-state', 'three-state', 'golden', 'cf', 'renewal', 'renewal-heavy'];
 
 interface Tally {
   covered: number;

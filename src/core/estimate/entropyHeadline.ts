@@ -35,6 +35,11 @@ export const SETTLED_FROM = 4;
 /** Drift of E log R_n - n h per level below SETTLED_FROM, nats: fair coin, (-0.440413 + 0.185313)/3
  * from THEORY.md section 3's exact table. */
 export const EARLY_SLOPE_DRIFT = 0.085;
+/** A plug-in whose last step is below this share of its standard error has a negligible memory bias
+ * (rule 2): a bias of b standard errors lowers the coverage of a 95% interval from 0.950 to 0.944 at
+ * b = 0.25 and 0.921 at b = 0.5 (normal tails, common practice, no source); the remaining bias of
+ * geometrically shrinking steps is a small multiple of the last step, so a quarter keeps it near 0.5. */
+export const NEGLIGIBLE_STEP_SHARE = 0.25;
 
 /**
  * Picks the least-biased entropy-rate estimate for these data, by a stated rule.
@@ -49,7 +54,11 @@ export const EARLY_SLOPE_DRIFT = 0.085;
  * 1. if the conditional entropies have reached a plateau (last step within two standard errors of
  *    zero, k >= 2), the plug-in h_k has no visible bias of either kind and is the headline;
  * 2. otherwise the return-time slope (the default) is the headline, its bias vanishing
- *    exponentially in n while the plug-in's memory bias is seen to persist; but when the slope's
+ *    exponentially in n while the plug-in's memory bias is seen to persist; but when that bias is
+ *    visible yet small against the plug-in's own error (last step below NEGLIGIBLE_STEP_SHARE of its
+ *    standard error), the plug-in stays the headline: its interval is hardly shifted, while a slope
+ *    over the few n the data allow can carry an offset that mixes too slowly to have settled
+ *    (renewal chains with polynomial mixing); and when the slope's
  *    range starts below n = SETTLED_FROM the offset is still drifting fast (for a fair coin
  *    E log R_n - n h moves by -0.085 per level between n = 1 and 4, THEORY.md section 3 [calc]),
  *    so the plug-in at the largest well-sampled k is preferred when its last step h_(k-1) - h_k is
@@ -98,6 +107,18 @@ export function chooseEntropyHeadline(c: HeadlineCandidates, unitName: string): 
         `The conditional block entropies have reached a plateau at k = ${p.k} (${stepText}), so the plug-in estimate shows no ` +
         `memory bias and, being well sampled, little sampling bias; the return-time slope can still carry a drifting offset. ` +
         `Reported in ${unitName}.`,
+      warnings,
+    };
+  }
+  const stepNegligible =
+    p.estimate !== null && p.step !== null && p.standardError !== null && Math.abs(p.step) < NEGLIGIBLE_STEP_SHARE * p.standardError;
+  if (stepNegligible) {
+    return {
+      method: 'plugin-conditional',
+      reason:
+        `The conditional block entropies still fall at k = ${p.k} (${stepText}), but by less than ${NEGLIGIBLE_STEP_SHARE} of the ` +
+        `plug-in's standard error (${fmt(p.standardError ?? 0)} nats): its remaining memory bias barely moves its interval, ` +
+        `while the return-time slope over the n this length allows may carry an offset that has not settled. Reported in ${unitName}.`,
       warnings,
     };
   }

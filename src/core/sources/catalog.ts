@@ -9,8 +9,10 @@ import { renewalSource } from './renewalSource';
 /**
  * Ready-made reference sources, each with its exact h and sigma^2 (or an honest null): the fair
  * coin, Bernoulli(0.3), the two-state and three-state chains of THEORY.md section 2, the golden-mean
- * Parry measure, continued-fraction digits and the renewal process with tail exponent 1.5. Every
- * id is a spec that parseSourceSpec turns back into the same source.
+ * Parry measure, continued-fraction digits, and the renewal process with gap tail exponent 2.5
+ * (finite gap variance: slow, polynomial mixing, but sigma^2 and the intervals' central limit hold)
+ * and 1.5 (infinite gap variance: the Gaussian limit fails, the case that shows it). Every id is a
+ * spec that parseSourceSpec turns back into the same source.
  */
 export function sourceCatalog(): ReferenceSource[] {
   const twoState = markovSource([
@@ -29,6 +31,7 @@ export function sourceCatalog(): ReferenceSource[] {
     { ...threeState, label: 'Three-state chain [[.5, .3, .2], [.2, .6, .2], [.1, .2, .7]]' },
     goldenMeanSource(),
     continuedFractionSource(),
+    renewalSource(2.5),
     renewalSource(1.5),
   ];
 }

@@ -93,3 +93,47 @@ export function renewalGapEntropy(alpha: number): number {
 export function renewalEntropyRate(alpha: number): number {
   return renewalGapEntropy(alpha) / renewalMeanGap(alpha);
 }
+
+/** Smallest tail exponent for which renewalInformationVariance is claimed: below it the tail integral
+ * e^{-(alpha-2) y} would need y beyond what doubles reach (x = M e^y < 1e300) to fall below e^-68. */
+export const VARIANCE_ALPHA_MIN = 2.1;
+
+/**
+ * sigma^2 of the stationary renewal process, nats^2 per symbol:
+ * sigma^2 = E[(Y - h T)^2] / E[T] with Y = -log P(T) the information of one gap, h = E[Y]/E[T].
+ * The information of a long stretch is, up to boundary terms, the sum of Y over its gaps, a
+ * renewal-reward process; its central limit theorem has exactly this variance when E[T^2] is finite
+ * (alpha > 2) (Smith 1955, renewal-reward CLT; see Asmussen, Applied Probability and Queues, 2003,
+ * VI.3, from memory). Evaluated like renewalGapEntropy: direct sum to M plus a Simpson tail integral
+ * on a logarithmic scale and Euler-Maclaurin end corrections.
+ * @returns null for alpha < VARIANCE_ALPHA_MIN (the gap variance is infinite for alpha <= 2, and the
+ * tail converges too slowly to evaluate just above 2)
+ */
+export function renewalInformationVariance(alpha: number): number | null {
+  checkTailExponent(alpha);
+  if (alpha < VARIANCE_ALPHA_MIN) return null;
+  const h = renewalEntropyRate(alpha);
+  const term = (m: number): number => {
+    const p = renewalGapProbability(alpha, m);
+    if (!(p > 0)) return 0;
+    const d = -Math.log(p) - h * m;
+    return p * d * d;
+  };
+  const sum = new CompensatedSum();
+  for (let m = DIRECT_TERMS - 1; m >= 1; m--) sum.add(term(m));
+  const big = DIRECT_TERMS;
+  // x f(x) decays like e^{-(alpha-2) y} with x = M e^y; stop where that is below e^-68.
+  const yMax = Math.min(68 / (alpha - 2), 680);
+  const panels = 2 * Math.ceil((TAIL_PANELS * yMax) / 80 / 2);
+  const step = yMax / panels;
+  let integral = 0;
+  for (let k = 0; k <= panels; k++) {
+    const x = big * Math.exp(k * step);
+    const weight = k === 0 || k === panels ? 1 : k % 2 === 1 ? 4 : 2;
+    integral += weight * term(x) * x;
+  }
+  sum.add((integral * step) / 3);
+  sum.add(term(big) / 2);
+  sum.add(-(term(big + 1) - term(big - 1)) / 2 / 12);
+  return sum.value() / renewalMeanGap(alpha);
+}

@@ -50,7 +50,7 @@ describe('chooseEntropyHeadline', () => {
 
   it('prefers the plug-in at its top k over a slope confined to small n when its last step is below the early drift', () => {
     // source: the stated rule (entropyHeadline.ts, rule 2); the drift at small n is THEORY.md section 3's fair-coin table
-    const flatTop: PluginConditionalResult = { ...plugin(1.2734, false, 3), step: -0.00002, stepStandardError: 0.00007 };
+    const flatTop: PluginConditionalResult = { ...plugin(1.2734, false, 3), step: 0.004, stepStandardError: 0.0007 };
     const early = chooseEntropyHeadline(candidates({ returnSlope: est(1.363, 0.003, [2, 3]), pluginConditional: flatTop }), 'nat/symbol');
     expect(early.method).toBe('plugin-conditional');
     expect(early.reason).toContain('still drifts');
@@ -58,6 +58,18 @@ describe('chooseEntropyHeadline', () => {
     expect(settled.method).toBe('return-slope');
     const falling: PluginConditionalResult = { ...flatTop, step: 0.2, stepStandardError: 0.001 };
     expect(chooseEntropyHeadline(candidates({ returnSlope: est(1.363, 0.003, [2, 3]), pluginConditional: falling }), 'nat/symbol').method).toBe('return-slope');
+  });
+
+  it('keeps the plug-in when its last step is visible but below a quarter of its standard error', () => {
+    // source: the stated rule (entropyHeadline.ts, rule 2): step 0.0002 < 0.25 * 0.001, yet 4 step errors from zero
+    const smallStep: PluginConditionalResult = { ...plugin(0.512, false, 9), step: 0.0002, stepStandardError: 0.00005 };
+    const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.502, 0.003, [9, 10]), pluginConditional: smallStep }), 'nat/symbol');
+    expect(c.method).toBe('plugin-conditional');
+    expect(c.reason).toContain('barely moves its interval');
+    const visible: PluginConditionalResult = { ...smallStep, step: 0.0003 };
+    expect(chooseEntropyHeadline(candidates({ returnSlope: est(0.502, 0.003, [9, 10]), pluginConditional: visible }), 'nat/symbol').method).toBe(
+      'return-slope',
+    );
   });
 
   it('warns when a return slope disagrees with a converged plug-in by more than three standard errors', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { parseSourceSpec, sourceCatalog } from '../../../src/core/sources/catalog';
 
 describe('sourceCatalog', () => {
-  it('lists the seven reference sources with distinct ids', () => {
+  it('lists the eight reference sources with distinct ids', () => {
     const ids = sourceCatalog().map((s) => s.id);
     expect(ids).toEqual([
       'coin',
@@ -11,6 +11,7 @@ describe('sourceCatalog', () => {
       'markov:0.5,0.3,0.2;0.2,0.6,0.2;0.1,0.2,0.7',
       'golden',
       'cf',
+      'renewal:2.5',
       'renewal:1.5',
     ]);
   });
@@ -23,11 +24,11 @@ describe('sourceCatalog', () => {
     }
   });
 
-  it('states h for every source and sigma^2 except for the renewal process', () => {
+  it('states h for every source and sigma^2 except for the renewal process with infinite gap variance', () => {
     for (const source of sourceCatalog()) {
       expect(source.facts.entropyRate).not.toBeNull();
       expect(source.facts.description.length).toBeGreaterThan(40);
-      if (source.id.startsWith('renewal')) expect(source.facts.sigma2).toBeNull();
+      if (source.id === 'renewal:1.5') expect(source.facts.sigma2).toBeNull();
       else expect(source.facts.sigma2).not.toBeNull();
     }
   });

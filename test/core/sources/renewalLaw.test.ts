@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { markovEntropyRate } from '../../../src/core/sources/markovEntropy';
+import { markovEntropyRate, markovVarentropyRate } from '../../../src/core/sources/markovEntropy';
 import {
   renewalEntropyRate,
   renewalGapEntropy,
   renewalGapProbability,
+  renewalInformationVariance,
   renewalMeanGap,
 } from '../../../src/core/sources/renewalLaw';
 
@@ -79,5 +80,68 @@ describe('renewalEntropyRate', () => {
 
   it('is H(T)/zeta(alpha) for the full law', () => {
     expect(renewalEntropyRate(1.5)).toBeCloseTo(renewalGapEntropy(1.5) / renewalMeanGap(1.5), 15);
+  });
+});
+
+/** Age chain of a gap law q on 1..K (see the entropy-rate test above). */
+function ageChain(q: readonly number[]): number[][] {
+  const k = q.length;
+  const rows: number[][] = [];
+  let survival = 1;
+  for (let a = 0; a < k; a++) {
+    const hazard = a === k - 1 ? 1 : q[a]! / survival;
+    const row = new Array<number>(k).fill(0);
+    row[0] = hazard;
+    if (a < k - 1) row[a + 1] = 1 - hazard;
+    rows.push(row);
+    survival -= q[a]!;
+  }
+  return rows;
+}
+
+describe('renewalInformationVariance', () => {
+  it('uses the renewal-reward formula, which equals the age chain sigma^2 for a truncated gap law', () => {
+    // The age chain is a Markov chain whose path and the symbols determine each other, so both have
+    // the same sigma^2; the chain's comes from its fundamental matrix (markovVarentropyRate, Kemeny &
+    // Snell), an independent method. Formula: E[(Y - hT)^2]/E[T], Y = -log q(T).
+    for (const alpha of [1.5, 2.5]) {
+      const k = 60;
+      const p = Array.from({ length: k }, (_, i) => renewalGapProbability(alpha, i + 1));
+      const mass = p.reduce((a, b) => a + b, 0);
+      const q = p.map((x) => x / mass);
+      let entropy = 0;
+      let mean = 0;
+      for (let m = 1; m <= k; m++) {
+        entropy -= q[m - 1]! * Math.log(q[m - 1]!);
+        mean += m * q[m - 1]!;
+      }
+      const h = entropy / mean;
+      let reward = 0;
+      for (let m = 1; m <= k; m++) reward += q[m - 1]! * (-Math.log(q[m - 1]!) - h * m) ** 2;
+      expect(markovVarentropyRate(ageChain(q))).toBeCloseTo(reward / mean, 9);
+    }
+  });
+
+  it('agrees with a direct sum over 2 10^6 gaps plus the leading tail term', () => {
+    // Beyond M the terms are p(m)(-log p(m) - h m)^2 ~ alpha h^2 m^(1-alpha), whose sum is about
+    // alpha h^2 M^(2-alpha)/(alpha-2); what that leaves out is smaller by a factor of order log(M)/(h M).
+    for (const alpha of [2.5, 3, 4]) {
+      const h = renewalEntropyRate(alpha);
+      const M = 2_000_000;
+      let direct = 0;
+      for (let m = M; m >= 1; m--) {
+        const p = renewalGapProbability(alpha, m);
+        direct += p * (-Math.log(p) - h * m) ** 2;
+      }
+      const tail = (alpha * h * h * M ** (2 - alpha)) / (alpha - 2);
+      const expected = (direct + tail) / renewalMeanGap(alpha);
+      expect(Math.abs(renewalInformationVariance(alpha)! - expected) / expected).toBeLessThan(1e-6);
+    }
+  });
+
+  it('claims nothing below alpha = 2.1, where the gap variance is infinite or its tail too slow', () => {
+    expect(renewalInformationVariance(1.5)).toBeNull();
+    expect(renewalInformationVariance(2)).toBeNull();
+    expect(renewalInformationVariance(2.1)).not.toBeNull();
   });
 });

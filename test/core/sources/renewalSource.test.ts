@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { renewalEntropyRate } from '../../../src/core/sources/renewalLaw';
+import { renewalEntropyRate, renewalInformationVariance } from '../../../src/core/sources/renewalLaw';
 import { renewalSource } from '../../../src/core/sources/renewalSource';
 
 describe('renewalSource', () => {
@@ -10,7 +10,16 @@ describe('renewalSource', () => {
     expect(source.facts.sigma2).toBeNull();
     expect(source.facts.gaussianLimit).toBe(false);
     expect(source.facts.description).toMatch(/infinite/);
-    expect(renewalSource(3).facts.description).not.toMatch(/infinite/);
+    expect(renewalSource(3.5).facts.description).not.toMatch(/infinite/);
+  });
+
+  it('states sigma^2 from the renewal-reward formula once the gap variance is finite', () => {
+    // source: renewalInformationVariance (checked against the age chain in renewalLaw.test.ts)
+    const finite = renewalSource(2.5);
+    expect(finite.facts.sigma2).toBe(renewalInformationVariance(2.5));
+    expect(finite.facts.gaussianLimit).toBe(false);
+    expect(finite.facts.description).toMatch(/third moment of the gap is infinite/);
+    expect(renewalSource(3.5).facts.gaussianLimit).toBe(true);
   });
 
   it('defaults to alpha = 1.5', () => {
