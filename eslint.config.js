@@ -35,6 +35,21 @@ export default tseslint.config(
     },
   },
   {
+    // Figure models are pure (no DOM): the workbench draws them and the command line writes them as SVG.
+    files: ['src/figures/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: layer(['ui', 'store', 'workers', 'export', 'cli']), message: 'src/figures imports only the core and pure d3 modules.' },
+            { group: ['node:*', 'fs', 'path', 'os', 'worker_threads', 'react', 'react-dom', 'd3', 'd3-selection', 'd3-axis', 'd3-transition', 'd3-zoom', 'd3-brush', 'd3-drag'], message: 'src/figures is host-free: no Node built-ins, React, DOM or DOM-touching d3 modules.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['src/ui/**/*.{ts,tsx}', 'src/export/**/*.ts', 'src/main.tsx'],
     plugins: { 'react-hooks': reactHooks },
     languageOptions: { globals: globals.browser },

@@ -1,4 +1,6 @@
 import { useEffect } from 'react';
+import { ConvergencePanel } from './panels/ConvergencePanel';
+import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
 import { InputPanel } from './panels/InputPanel';
@@ -6,6 +8,7 @@ import { LengthTablePanel } from './panels/LengthTablePanel';
 import { RunPanel } from './panels/RunPanel';
 import { SettingsPanel } from './panels/SettingsPanel';
 import { SummaryPanel } from './panels/SummaryPanel';
+import { VarianceGrowthPanel } from './panels/VarianceGrowthPanel';
 import { openDemoIfEmpty } from './runner';
 
 /** The workbench shell: header, controls on the left, results on the right. */
@@ -41,6 +44,17 @@ export function App() {
           </ErrorBoundary>
         </div>
       </main>
+      <div className="figures">
+        <ErrorBoundary name="Convergence figure">
+          <ConvergencePanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Envelope figure">
+          <EnvelopePanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Variance growth figure">
+          <VarianceGrowthPanel />
+        </ErrorBoundary>
+      </div>
       <footer className="app-footer">
         Demo data are invented. Estimates are research estimates, not a diagnosis; everything runs in this browser tab and no data leave it.
       </footer>

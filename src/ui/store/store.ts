@@ -11,8 +11,10 @@ import { initialRunState, runActions } from './runSlice';
 import type { RunState } from './runSlice';
 import { initialSettingsState, restoreSettings, settingsActions } from './settingsSlice';
 import type { SettingsState } from './settingsSlice';
+import { initialViewState, restoreView, viewActions } from './viewSlice';
+import type { ViewState } from './viewSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
@@ -21,16 +23,16 @@ export const STORAGE_KEY = 'returnrate.workbench';
 const STORAGE_VERSION = 1;
 
 /** The part that survives a reload: settings and the last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState;
+export type PersistedState = SettingsState & ResultState & ViewState;
 
 export function persistedPart(state: AppState): PersistedState {
-  return { settings: state.settings, ...resultForStorage(state) };
+  return { settings: state.settings, view: state.view, ...resultForStorage(state) };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
 export function mergePersisted(stored: unknown, current: AppState): AppState {
   const s = typeof stored === 'object' && stored !== null ? (stored as Partial<Record<keyof PersistedState, unknown>>) : {};
-  return { ...current, settings: restoreSettings(s.settings), ...restoreResult(s) };
+  return { ...current, settings: restoreSettings(s.settings), view: restoreView(s.view), ...restoreResult(s) };
 }
 
 /**
@@ -39,7 +41,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
  */
 export function createAppStore(storage: () => StateStorage) {
   return createStore<AppState>()(
-    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState }), {
+    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState }), {
       name: STORAGE_KEY,
       version: STORAGE_VERSION,
       storage: createJSONStorage(storage),
@@ -70,7 +72,7 @@ function pageStorage(): StateStorage {
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store) };
 }
 
 /** The page's store. */
@@ -95,4 +97,6 @@ export const {
   failRun,
   dismissFailure,
   clearResult,
+  updateView,
+  resetView,
 } = bindActions(appStore);

@@ -29,10 +29,10 @@ describe('app store persistence', () => {
     expect(state.result).toBeNull();
   });
 
-  it('saves only settings, result and the paths flag', () => {
+  it('saves only settings, result, the paths flag and the view options', () => {
     const storage = memoryStorage();
     testStore(storage).updateSettings({ maxN: 7 });
     const saved = JSON.parse(String(storage.getItem(STORAGE_KEY))) as { state: Record<string, unknown> };
-    expect(Object.keys(saved.state).sort()).toEqual(['pathsDropped', 'result', 'settings']);
+    expect(Object.keys(saved.state).sort()).toEqual(['pathsDropped', 'result', 'settings', 'view']);
   });
 });

@@ -1,0 +1,18 @@
+import { useMemo, type ReactNode } from 'react';
+import type { Figure, FigureSize } from '../../figures';
+import { ChartFrame } from './ChartFrame';
+import { figureHeight, useElementWidth } from './useElementWidth';
+
+/** Measures the available width, asks `build` for the figure at that size, and draws it or its reason for being absent. */
+export function FigureSlot({ build, testId }: { readonly build: (size: FigureSize) => Figure; readonly testId: string }): ReactNode {
+  const { ref, width } = useElementWidth<HTMLDivElement>();
+  const w = Math.max(260, width);
+  const h = figureHeight(width);
+  // `build` should be stable (useCallback) so a figure is rebuilt only when its inputs or size change.
+  const figure = useMemo(() => build({ width: w, height: h }), [build, w, h]);
+  return (
+    <div ref={ref} className="figure-slot">
+      {figure.kind === 'figure' ? <ChartFrame model={figure.model} testId={testId} /> : <p className="muted" role="note">{figure.message}</p>}
+    </div>
+  );
+}
