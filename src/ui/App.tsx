@@ -3,8 +3,10 @@ import { ConvergencePanel } from './panels/ConvergencePanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
+import { FluctuationPanel } from './panels/FluctuationPanel';
 import { InputPanel } from './panels/InputPanel';
 import { LengthTablePanel } from './panels/LengthTablePanel';
+import { ReturnLawPanel } from './panels/ReturnLawPanel';
 import { RunPanel } from './panels/RunPanel';
 import { SettingsPanel } from './panels/SettingsPanel';
 import { SummaryPanel } from './panels/SummaryPanel';
@@ -53,6 +55,12 @@ export function App() {
         </ErrorBoundary>
         <ErrorBoundary name="Variance growth figure">
           <VarianceGrowthPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Fluctuation figures">
+          <FluctuationPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Return law figure">
+          <ReturnLawPanel />
         </ErrorBoundary>
       </div>
       <footer className="app-footer">
