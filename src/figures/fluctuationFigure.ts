@@ -113,7 +113,8 @@ export function fluctuationQuantileFigure(statistics: FluctuationStatistics, siz
   const hi = Math.max(...values);
   const plot = plotArea(size);
   const { scale: x, axis: xAxis } = linearAxis([lo, hi], [plot.left, plot.left + plot.width], { label: 'N(0,1) quantile', unit: '' });
-  const { scale: y, axis: yAxis } = linearAxis([lo, hi], [plot.top + plot.height, plot.top], { label: FLUCTUATION_LABEL, unit: '' });
+  // Both axes on x's rounded domain, so the identity line runs corner to corner.
+  const { scale: y, axis: yAxis } = linearAxis(x.domain() as [number, number], [plot.top + plot.height, plot.top], { label: FLUCTUATION_LABEL, unit: '' }, false);
   const levelText = `${Math.round(q.level * 100)}%`;
   const band: BandMark = {
     id: 'band',

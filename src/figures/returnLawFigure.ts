@@ -68,8 +68,11 @@ export function returnLawFigure(statistics: ReturnLawStatistics, size: FigureSiz
     const v = law.survival[g] ?? Number.NaN;
     if (v > 0 && v < floor) floor = v;
   }
-  const plot = plotArea(size);
   const tMax = law.s[law.s.length - 1] ?? 0;
+  // Show e^(-s) down to the largest s as well, unless that stretches the axis more than two decades
+  // below the curve's lowest step; lower parts are clipped by the renderer.
+  floor = Math.min(floor, Math.max(Math.exp(-tMax), floor / 100));
+  const plot = plotArea(size);
   const { scale: x, axis: xAxis } = linearAxis([0, tMax > 0 ? tMax : 1], [plot.left, plot.left + plot.width], { label: 's', unit: '' });
   const { scale: y, axis: yAxis } = logAxis([floor, 1], [plot.top + plot.height, plot.top], { label: 'P(t > s)', unit: 'log scale' });
   const [lowest] = y.domain() as [number, number];
@@ -82,7 +85,7 @@ export function returnLawFigure(statistics: ReturnLawStatistics, size: FigureSiz
     const v = law.survival[g];
     const se = law.standardError[g] ?? 0;
     survival.push({ x: s, y: log10(v) });
-    exponential.push({ x: s, y: Math.max(lowest, -s / Math.LN10) });
+    exponential.push({ x: s, y: -s / Math.LN10 });
     const ok = v !== undefined && v > 0;
     band.push({
       x: s,
