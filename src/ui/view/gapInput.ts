@@ -7,6 +7,6 @@ export function parseGap(text: string): { value: number } | { message: string } 
   if (trimmed === '') return { message: 'Enter a gap: a whole number of symbols, 1 or more.' };
   if (!/^\d+$/.test(trimmed)) return { message: `The gap must be a whole number of symbols, 1 or more; got “${trimmed}”.` };
   const value = Number(trimmed);
-  if (value < 1 || value > MAX_GAP) return { message: `The gap must be from 1 to ${MAX_GAP.toExponential(0)}; got ${trimmed}.` };
+  if (value < 1 || value > MAX_GAP) return { message: `The gap must be from 1 to ${MAX_GAP.toLocaleString('en-US')}; got ${trimmed}.` };
   return { value };
 }
