@@ -1,8 +1,10 @@
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { expect, test } from '@playwright/test';
 import type { Locator, Page } from '@playwright/test';
+import { twoStateChainText } from './sequenceFiles';
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
@@ -90,5 +92,24 @@ test('the fluctuation and return-law views draw their figures and follow the blo
   await page.reload();
   await expect(page.getByRole('slider', { name: 'Block length n for the fluctuations' })).toHaveValue(String(after));
   await expect(page.getByRole('slider', { name: 'Block length n for the return law' })).toHaveValue(String(lawN + 1));
+  expect(errors).toEqual([]);
+});
+
+test('for a fair coin (σ² = 0) the fluctuation view says so and shows the return law instead', async ({ page }) => {
+  const errors = collectErrors(page);
+  await page.goto('/');
+  await expect(page.getByTestId('entropy-interval')).toContainText(/95% interval/, { timeout: 60_000 });
+  // Stay probability 1/2 in both states: independent fair coin flips, whose information per symbol never varies.
+  const file = join(mkdtempSync(join(tmpdir(), 'returnrate-e2e-')), 'fair-coin.txt');
+  writeFileSync(file, twoStateChainText(50_000, [0.5, 0.5], 3));
+  await page.getByLabel('Choose a sequence file').setInputFiles(file);
+  await expect(page.locator('.input-name')).toHaveText('fair-coin.txt', { timeout: 30_000 });
+  await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 60_000 });
+  const section = page.locator('section[aria-labelledby="fluctuation-heading"]');
+  await expect(section.getByTestId('fluctuation-negligible')).toContainText('σ̂² is negligible');
+  await expect(section.getByTestId('fluctuation-qq-figure')).toHaveCount(0);
+  const law = section.getByTestId('fluctuation-return-law-figure');
+  await expectFigure(law, 's', 'P(t > s) (log scale)', ['band', 'line']);
+  await shoot(section, 'fluctuations-fair-coin');
   expect(errors).toEqual([]);
 });
