@@ -17,3 +17,9 @@ export { varianceGrowthFigure, fittedVarianceLine } from './varianceGrowthFigure
 export type { FittedLine } from './varianceGrowthFigure';
 export { markerPath } from './markerPath';
 export { nearestStop, stepStop } from './nearestStop';
+export { fluctuationStatistics, fluctuationQuantileFigure, fluctuationHistogramFigure, FLUCTUATION_LABEL, MIN_FLUCTUATION_VALUES } from './fluctuationFigure';
+export type { FluctuationStatistics } from './fluctuationFigure';
+export { returnLawStatistics, returnLawFigure } from './returnLawFigure';
+export type { ReturnLawStatistics } from './returnLawFigure';
+export { clampViewLength, defaultViewLength, viewLengthRange } from './viewLength';
+export { pValueText } from './pValueText';

@@ -3,10 +3,12 @@ import { ConvergencePanel } from './panels/ConvergencePanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
+import { FluctuationPanel } from './panels/FluctuationPanel';
 import { GalleryPanel } from './panels/GalleryPanel';
 import { InputPanel } from './panels/InputPanel';
 import { LengthTablePanel } from './panels/LengthTablePanel';
 import { PreviewPanel } from './panels/PreviewPanel';
+import { ReturnLawPanel } from './panels/ReturnLawPanel';
 import { RunPanel } from './panels/RunPanel';
 import { SettingsPanel } from './panels/SettingsPanel';
 import { SummaryPanel } from './panels/SummaryPanel';
@@ -61,6 +63,12 @@ export function App() {
         </ErrorBoundary>
         <ErrorBoundary name="Variance growth figure">
           <VarianceGrowthPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Fluctuation figures">
+          <FluctuationPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Return law figure">
+          <ReturnLawPanel />
         </ErrorBoundary>
       </div>
       <footer className="app-footer">

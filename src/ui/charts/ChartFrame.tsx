@@ -20,6 +20,8 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
   const stop = index >= 0 ? model.readout[index] : undefined;
   const clip = `${id}-clip`;
   const layer = model.pathLayer;
+  // A figure whose x axis is not the block length (e.g. a Q-Q plot) has no read-out stops.
+  const hasReadout = model.readout.length > 0;
 
   const onPointer = (event: PointerEvent<SVGSVGElement>) => {
     const box = event.currentTarget.getBoundingClientRect();
@@ -44,10 +46,10 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
     <figure className="chart" data-testid={testId}>
       <div
         className="chart-plot"
-        tabIndex={0}
+        tabIndex={hasReadout ? 0 : undefined}
         role="group"
-        aria-label={`${model.title}. Use the left and right arrow keys to read the values at each block length.`}
-        aria-describedby={`${id}-readout`}
+        aria-label={hasReadout ? `${model.title}. Use the left and right arrow keys to read the values at each block length.` : model.title}
+        aria-describedby={hasReadout ? `${id}-readout` : undefined}
         onKeyDown={onKey}
         style={{ height: size.height }}
       >
@@ -153,24 +155,26 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
           {stop !== undefined && <line className="cursor" x1={stop.x} x2={stop.x} y1={plot.top} y2={bottom} aria-hidden="true" />}
         </svg>
       </div>
-      <div id={`${id}-readout`} className="chart-readout" aria-live="polite" data-testid="chart-readout">
-        {stop === undefined ? (
-          <span className="muted">Point at the plot, or focus it and use the arrow keys, to read the values at a block length.</span>
-        ) : (
-          <dl>
-            <div>
-              <dt>n</dt>
-              <dd data-testid="readout-n">{stop.n}</dd>
-            </div>
-            {stop.rows.map((r) => (
-              <div key={r.id}>
-                <dt>{r.label}</dt>
-                <dd>{r.value}</dd>
+      {hasReadout && (
+        <div id={`${id}-readout`} className="chart-readout" aria-live="polite" data-testid="chart-readout">
+          {stop === undefined ? (
+            <span className="muted">Point at the plot, or focus it and use the arrow keys, to read the values at a block length.</span>
+          ) : (
+            <dl>
+              <div>
+                <dt>n</dt>
+                <dd data-testid="readout-n">{stop.n}</dd>
               </div>
-            ))}
-          </dl>
-        )}
-      </div>
+              {stop.rows.map((r) => (
+                <div key={r.id}>
+                  <dt>{r.label}</dt>
+                  <dd>{r.value}</dd>
+                </div>
+              ))}
+            </dl>
+          )}
+        </div>
+      )}
       <Legend entries={model.legend} label={`Legend: ${model.title}`} />
       {model.notes.length > 0 && (
         <ul className="chart-notes">

@@ -11,13 +11,19 @@ export interface ViewOptions {
   readonly errorC: number;
   /** Draw the sampled paths in the convergence figure. */
   readonly showPaths: boolean;
+  /** Block length of the fluctuation view; null: the middle of the result's trusted range. */
+  readonly fluctuationN: number | null;
+  /** Least distance between the positions the fluctuation view keeps (integer >= 1). */
+  readonly fluctuationGap: number;
+  /** Block length of the return-law view; null: the middle of the result's trusted range. */
+  readonly returnLawN: number | null;
 }
 
 export interface ViewState {
   readonly view: ViewOptions;
 }
 
-export const DEFAULT_VIEW: ViewOptions = { ...DEFAULT_ENVELOPE_OPTIONS, showPaths: true };
+export const DEFAULT_VIEW: ViewOptions = { ...DEFAULT_ENVELOPE_OPTIONS, showPaths: true, fluctuationN: null, fluctuationGap: 1, returnLawN: null };
 
 export const initialViewState: ViewState = { view: DEFAULT_VIEW };
 
@@ -26,7 +32,19 @@ export function restoreView(stored: unknown): ViewOptions {
   if (typeof stored !== 'object' || stored === null) return DEFAULT_VIEW;
   const s = stored as Record<string, unknown>;
   const num = (key: 'z' | 'delta' | 'errorC'): number => (typeof s[key] === 'number' && Number.isFinite(s[key]) ? s[key] : DEFAULT_VIEW[key]);
-  return { z: num('z'), delta: num('delta'), errorC: num('errorC'), showPaths: typeof s['showPaths'] === 'boolean' ? s['showPaths'] : DEFAULT_VIEW.showPaths };
+  const length = (key: 'fluctuationN' | 'returnLawN' | 'fluctuationGap', fallback: number | null): number | null => {
+    const v = s[key];
+    return typeof v === 'number' && Number.isInteger(v) && v >= 1 ? v : fallback;
+  };
+  return {
+    z: num('z'),
+    delta: num('delta'),
+    errorC: num('errorC'),
+    showPaths: typeof s['showPaths'] === 'boolean' ? s['showPaths'] : DEFAULT_VIEW.showPaths,
+    fluctuationN: length('fluctuationN', null),
+    fluctuationGap: length('fluctuationGap', DEFAULT_VIEW.fluctuationGap) ?? DEFAULT_VIEW.fluctuationGap,
+    returnLawN: length('returnLawN', null),
+  };
 }
 
 export function viewActions(store: StoreHandle) {

@@ -22,4 +22,9 @@ describe('view slice', () => {
     expect(restoreView({ delta: 0.2, errorC: 'big', showPaths: 1 })).toEqual({ ...DEFAULT_VIEW, delta: 0.2 });
     expect(restoreView(undefined)).toEqual(DEFAULT_VIEW);
   });
+
+  it('restoreView keeps chosen block lengths and gap only when they are integers >= 1', () => {
+    expect(restoreView({ fluctuationN: 7, returnLawN: 3, fluctuationGap: 25 })).toEqual({ ...DEFAULT_VIEW, fluctuationN: 7, returnLawN: 3, fluctuationGap: 25 });
+    expect(restoreView({ fluctuationN: 2.5, returnLawN: 0, fluctuationGap: -1 })).toEqual(DEFAULT_VIEW);
+  });
 });
