@@ -6,7 +6,7 @@ import globals from 'globals';
 const layer = (names) => names.flatMap((n) => [`**/${n}/**`, `**/${n}`]);
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'dist-cli/**', 'node_modules/**', 'test-results/**', 'playwright-report/**', 'coverage/**'] },
+  { ignores: ['dist/**', 'dist-cli/**', '.tsbuild/**', 'node_modules/**', 'test-results/**', 'playwright-report/**', 'coverage/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
