@@ -56,9 +56,10 @@ export const NEGLIGIBLE_STEP_SHARE = 0.25;
  * 2. otherwise the return-time slope (the default) is the headline, its bias vanishing
  *    exponentially in n while the plug-in's memory bias is seen to persist; but when that bias is
  *    visible yet small against the plug-in's own error (last step below NEGLIGIBLE_STEP_SHARE of its
- *    standard error), the plug-in stays the headline: its interval is hardly shifted, while a slope
- *    over the few n the data allow can carry an offset that mixes too slowly to have settled
- *    (renewal chains with polynomial mixing); and when the slope's
+ *    standard error) and the slope lies below the plug-in by more than two standard errors of their
+ *    difference, the plug-in stays the headline: its interval is hardly shifted, while the slope
+ *    carries an offset that has not settled over the few n the data allow (renewal chains with
+ *    polynomial mixing; the coverage study in DEVELOPERS.md shows both sides of this rule); and when the slope's
  *    range starts below n = SETTLED_FROM the offset is still drifting fast (for a fair coin
  *    E log R_n - n h moves by -0.085 per level between n = 1 and 4, THEORY.md section 3 [calc]),
  *    so the plug-in at the largest well-sampled k is preferred when its last step h_(k-1) - h_k is
@@ -112,13 +113,20 @@ export function chooseEntropyHeadline(c: HeadlineCandidates, unitName: string): 
   }
   const stepNegligible =
     p.estimate !== null && p.step !== null && p.standardError !== null && Math.abs(p.step) < NEGLIGIBLE_STEP_SHARE * p.standardError;
-  if (stepNegligible) {
+  if (stepNegligible && slope.estimate !== null && p.estimate !== null && disagree(slope, p, 2) && slope.estimate < p.estimate) {
+    warnings.push({
+      code: 'estimators-disagree',
+      message:
+        `The return-time slope (${fmt(slope.estimate)} nats) lies below the plug-in estimate (${fmt(p.estimate)} nats) by more ` +
+        `than two standard errors while the plug-in's last step is negligible: the offset E log R_n - n h has not settled at ` +
+        `n = ${slope.lengthsUsed?.[0]}..${slope.lengthsUsed?.[1]} (a slowly mixing source); a longer sequence would let larger n be used.`,
+    });
     return {
       method: 'plugin-conditional',
       reason:
         `The conditional block entropies still fall at k = ${p.k} (${stepText}), but by less than ${NEGLIGIBLE_STEP_SHARE} of the ` +
         `plug-in's standard error (${fmt(p.standardError ?? 0)} nats): its remaining memory bias barely moves its interval, ` +
-        `while the return-time slope over the n this length allows may carry an offset that has not settled. Reported in ${unitName}.`,
+        `while the return-time slope, well below it, carries an offset that has not settled. Reported in ${unitName}.`,
       warnings,
     };
   }

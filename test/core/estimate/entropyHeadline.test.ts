@@ -60,16 +60,20 @@ describe('chooseEntropyHeadline', () => {
     expect(chooseEntropyHeadline(candidates({ returnSlope: est(1.363, 0.003, [2, 3]), pluginConditional: falling }), 'nat/symbol').method).toBe('return-slope');
   });
 
-  it('keeps the plug-in when its last step is visible but below a quarter of its standard error', () => {
-    // source: the stated rule (entropyHeadline.ts, rule 2): step 0.0002 < 0.25 * 0.001, yet 4 step errors from zero
+  it('keeps the plug-in when its last step is below a quarter of its error and the slope lies well below it', () => {
+    // source: the stated rule (entropyHeadline.ts, rule 2): step 0.0002 < 0.25 * 0.001, yet 4 step errors
+    // from zero; 0.512 - 0.502 = 0.010 > 2 * hypot(0.003, 0.001) = 0.0063
     const smallStep: PluginConditionalResult = { ...plugin(0.512, false, 9), step: 0.0002, stepStandardError: 0.00005 };
     const c = chooseEntropyHeadline(candidates({ returnSlope: est(0.502, 0.003, [9, 10]), pluginConditional: smallStep }), 'nat/symbol');
     expect(c.method).toBe('plugin-conditional');
     expect(c.reason).toContain('barely moves its interval');
-    const visible: PluginConditionalResult = { ...smallStep, step: 0.0003 };
-    expect(chooseEntropyHeadline(candidates({ returnSlope: est(0.502, 0.003, [9, 10]), pluginConditional: visible }), 'nat/symbol').method).toBe(
-      'return-slope',
-    );
+    expect(c.warnings.map((w) => w.code)).toEqual(['estimators-disagree']);
+    const pick = (slope: EstimatorResult, plug: PluginConditionalResult) =>
+      chooseEntropyHeadline(candidates({ returnSlope: slope, pluginConditional: plug }), 'nat/symbol').method;
+    // a visible step (0.0003 > 0.00025), a slope within two errors (0.512 - 0.508 = 0.004), a slope above
+    expect(pick(est(0.502, 0.003, [9, 10]), { ...smallStep, step: 0.0003 })).toBe('return-slope');
+    expect(pick(est(0.508, 0.003, [9, 10]), smallStep)).toBe('return-slope');
+    expect(pick(est(0.522, 0.003, [9, 10]), smallStep)).toBe('return-slope');
   });
 
   it('warns when a return slope disagrees with a converged plug-in by more than three standard errors', () => {
