@@ -1,6 +1,7 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
 import { collectReturns, type LevelSums, type ReturnGeometry } from './collectReturns';
 import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
+import { partitionBinaryLevel } from './partitionBinaryLevel';
 import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
 
@@ -83,6 +84,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   const bits = Math.max(1, Math.ceil(Math.log2(alphabetSize)));
   const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
   const packed = perWord > 1;
+  const binary = alphabetSize === 2;
   let words = new Uint16Array(packed ? N : 0);
   let nextWords = new Uint16Array(packed ? N : 0);
   for (let i = 0; i < N; i++) order[i] = i;
@@ -107,7 +109,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
     const wordShift = ((n - 1) % perWord) * bits;
     if (packed && wordShift === 0) refreshWords(symbols, n - 1, bits, perWord, order, activeLength, words, nextWords);
-    const split = partitionLevel(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
+    const split = (binary ? partitionBinaryLevel : partitionLevel)(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
     const sums: LevelSums = {
       classes: 0,
       sumCountLogCount: 0,
