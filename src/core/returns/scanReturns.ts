@@ -109,22 +109,9 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
     const wordShift = ((n - 1) % perWord) * bits;
     if (packed && wordShift === 0) refreshWords(symbols, n - 1, bits, perWord, order, activeLength, words, nextWords);
-    const split = (binary ? partitionBinaryLevel : partitionLevel)(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
-    const sums: LevelSums = {
-      classes: 0,
-      sumCountLogCount: 0,
-      forwardObserved: 0,
-      forwardSumLog: 0,
-      forwardSumLog2: 0,
-      observed: 0,
-      sumLog: 0,
-      sumLog2: 0,
-      sumLogRc: 0,
-      sumLogRc2: 0,
-      matchCount: 0,
-      batches: new Float64Array(4 * batchCount),
-      histogram: new Float64Array(bins),
-    };
+    const partition = binary ? partitionBinaryLevel : partitionLevel;
+    const split = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
+    const sums = emptySums(bins, batchCount);
     collectReturns(next, split.active, n, geometry, sample, n === captureLevel ? captured : null, sums);
     if (!split.droppedFromActive && n >= 2) removedAlive--; // the dropped position had become unique before
     const singletons = removedAlive + split.newSingletons;
@@ -144,7 +131,8 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   // Every block is unique from here on: nothing returns, nothing matches.
   for (; n <= maxN; n++) {
     const positions = N - n + 1;
-    const level = uniqueLevel(n, positions, bins, batchCount);
+    // Every block occurs once: no classes, every position a singleton.
+    const level = levelFromSums(n, positions, emptySums(bins, batchCount), positions, batchCount);
     levels.push(level);
     options.onLevel?.(level, 0);
   }
@@ -194,13 +182,10 @@ function refreshWords(
   }
 }
 
-/** A level at which every block occurs once. */
-function uniqueLevel(n: number, positions: number, bins: number, batchCount: number): LevelStats {
+/** Sums of a level before any return is added. */
+function emptySums(bins: number, batchCount: number): LevelSums {
   return {
-    n,
-    positions,
-    distinctBlocks: positions,
-    singletons: positions,
+    classes: 0,
     sumCountLogCount: 0,
     forwardObserved: 0,
     forwardSumLog: 0,
@@ -210,12 +195,9 @@ function uniqueLevel(n: number, positions: number, bins: number, batchCount: num
     sumLog2: 0,
     sumLogRc: 0,
     sumLogRc2: 0,
-    histogram: new Float64Array(bins),
     matchCount: 0,
-    batchObserved: new Float64Array(batchCount),
-    batchSumLog: new Float64Array(batchCount),
-    batchSumLog2: new Float64Array(batchCount),
-    batchSumLogCount: new Float64Array(batchCount),
+    batches: new Float64Array(4 * batchCount),
+    histogram: new Float64Array(bins),
   };
 }
 

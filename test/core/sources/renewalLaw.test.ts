@@ -59,16 +59,7 @@ describe('renewalEntropyRate', () => {
     const p = Array.from({ length: k }, (_, i) => renewalGapProbability(alpha, i + 1));
     const mass = p.reduce((a, b) => a + b, 0);
     const q = p.map((x) => x / mass);
-    const rows: number[][] = [];
-    let survival = 1;
-    for (let a = 0; a < k; a++) {
-      const hazard = a === k - 1 ? 1 : q[a]! / survival;
-      const row = new Array<number>(k).fill(0);
-      row[0] = hazard;
-      if (a < k - 1) row[a + 1] = 1 - hazard;
-      rows.push(row);
-      survival -= q[a]!;
-    }
+    const rows = ageChain(q);
     let entropy = 0;
     let mean = 0;
     for (let m = 1; m <= k; m++) {
