@@ -34,8 +34,8 @@ export interface ConvergenceData {
   readonly estimate: number | null;
   readonly exact: number | null;
   readonly trustedRange: AnalysisResult['trustedRange'];
-  /** Said under the figure before its own notes (e.g. that the rows are partial). */
-  readonly notes: readonly string[];
+  /** True for the rows of a run still going or cancelled: the title says so. */
+  readonly partial: boolean;
 }
 
 /** A finished result as convergence data. */
@@ -49,13 +49,13 @@ export function convergenceDataOfResult(result: AnalysisResult): ConvergenceData
     estimate: Number.isFinite(result.entropy.estimate) ? result.entropy.estimate : null,
     exact: result.reference?.entropyRate ?? null,
     trustedRange: result.trustedRange,
-    notes: [],
+    partial: false,
   };
 }
 
 /** Rows of a run still going (or cancelled): no paths, estimate or trusted range yet, axis up to maxN. */
-export function partialConvergenceData(rows: readonly LengthRow[], unit: EntropyUnit, maxN: number, note: string): ConvergenceData {
-  return { rows, unit, maxN: Math.max(maxN, rows[rows.length - 1]?.n ?? 1), paths: null, estimate: null, exact: null, trustedRange: null, notes: [note] };
+export function partialConvergenceData(rows: readonly LengthRow[], unit: EntropyUnit, maxN: number): ConvergenceData {
+  return { rows, unit, maxN: Math.max(maxN, rows[rows.length - 1]?.n ?? 1), paths: null, estimate: null, exact: null, trustedRange: null, partial: true };
 }
 
 /**
@@ -72,7 +72,7 @@ export function convergenceFigure(result: AnalysisResult, size: FigureSize, opti
 /** The convergence figure from rows (a result's, or the partial rows of a running run). */
 export function convergenceFigureOfRows(data: ConvergenceData, size: FigureSize, options: ConvergenceOptions = {}): Figure {
   const { rows, unit, maxN, exact, estimate } = data;
-  if (rows.length === 0) return { kind: 'unavailable', message: data.notes[0] ?? 'No block length has finished yet.' };
+  if (rows.length === 0) return { kind: 'unavailable', message: 'No block length has finished yet.' };
   const toUnit = (nats: number | null): number | null => (nats === null ? null : entropyFromNats(nats, unit));
   const rate = (nats: number | null, n: number): number | null => (nats === null ? null : (toUnit(nats) as number) / n);
 
@@ -139,12 +139,12 @@ export function convergenceFigureOfRows(data: ConvergenceData, size: FigureSize,
     ],
   }));
 
-  const notes: string[] = [...data.notes];
+  const notes: string[] = [];
   if (showPaths && data.paths !== null && curves.length === 0) notes.push('No sampled paths in this result (a large saved result keeps only its summaries).');
   return {
     kind: 'figure',
     model: {
-      title: 'Convergence of log R_n / n',
+      title: data.partial ? `Convergence of log R_n / n (partial: n = 1..${rows[rows.length - 1]?.n ?? 0})` : 'Convergence of log R_n / n',
       description: `log R_n(x) / n against block length n in ${rateUnit}, for ${curves.length} sampled positions, with the mean, quantile bands, plug-in and conditional block entropies${exact === null ? '' : ' and the exact entropy rate'}.`,
       size,
       plot,

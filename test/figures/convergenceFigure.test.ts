@@ -70,8 +70,7 @@ describe('convergenceFigureOfRows', () => {
   });
 
   it('draws partial rows on an n axis up to the run\'s maxN, with no paths, estimate or trusted range, and says they are partial', () => {
-    const note = 'partial: n = 1..2 so far';
-    const m = model(convergenceFigureOfRows(partialConvergenceData(rows.slice(0, 2), 'nat', 10, note), SIZE));
+    const m = model(convergenceFigureOfRows(partialConvergenceData(rows.slice(0, 2), 'nat', 10), SIZE));
     // the axis runs from n = 1 at the plot's left edge to n = 10 at its right: n = 2 sits 1/9 of the way
     expect(m.x.ticks[m.x.ticks.length - 1]?.value).toBe(10);
     expect(m.readout[0]?.x).toBeCloseTo(m.plot.left, 2);
@@ -83,13 +82,11 @@ describe('convergenceFigureOfRows', () => {
     expect(m.lines.map((l) => l.id)).toEqual(['mean', 'plugin', 'conditional']);
     expect(m.pathLayer).toBeNull();
     expect(m.spans).toEqual([]);
-    expect(m.notes).toEqual([note]);
+    expect(m.title).toBe('Convergence of log R_n / n (partial: n = 1..2)');
+    expect(m.notes).toEqual([]);
   });
 
   it('says why there is no figure before the first row arrives', () => {
-    expect(convergenceFigureOfRows(partialConvergenceData([], 'nat', 10, 'Running x: rows appear as each block length n finishes.'), SIZE)).toEqual({
-      kind: 'unavailable',
-      message: 'Running x: rows appear as each block length n finishes.',
-    });
+    expect(convergenceFigureOfRows(partialConvergenceData([], 'nat', 10), SIZE)).toEqual({ kind: 'unavailable', message: 'No block length has finished yet.' });
   });
 });

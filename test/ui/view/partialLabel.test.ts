@@ -8,7 +8,7 @@ const base: PartialRows = { runId: 1, label: 'Fair coin', unit: 'nat', maxN: 30,
 describe('partialLabel', () => {
   it('says which rows have arrived while running, that more may come, and that the result replaces them', () => {
     expect(partialLabel({ ...base, rows: [lengthRow(1), lengthRow(2), lengthRow(3)] })).toBe(
-      'partial: n = 1..3 so far of at most 30, Fair coin; the final result replaces these rows.',
+      'partial: n = 1..3 so far (of at most 30) · Fair coin · the final result, with the estimate and sampled paths, replaces these rows.',
     );
   });
 
@@ -17,6 +17,8 @@ describe('partialLabel', () => {
   });
 
   it('says where a cancelled run stopped and that its rows are kept', () => {
-    expect(partialLabel({ ...base, status: 'cancelled', rows: [lengthRow(1), lengthRow(2)] })).toMatch(/^Cancelled at n = 2 of 30: partial rows n = 1\.\.2 of Fair coin, kept/);
+    expect(partialLabel({ ...base, status: 'cancelled', rows: [lengthRow(1), lengthRow(2)] })).toBe(
+      'Cancelled at n = 2 of 30 · Fair coin: the rows n = 1..2 are kept as computed, with no estimate or trusted range.',
+    );
   });
 });
