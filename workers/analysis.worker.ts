@@ -1,17 +1,41 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, createDigestingReader } from '../src/core';
-import type { AnalysisResult, AnalysisSettings, ReadResult, ReaderOptions } from '../src/core';
+import { analyzeSequence, createDigestingReader, lengthRowOfLevel } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions } from '../src/core';
 import { demoScenario } from './demoScenarios';
+import { createRowThrottle } from './rowThrottle';
 
 /** Reading reports bytes read; the scan reports each finished block length n and the positions still active. */
 export type AnalysisProgress =
   | { readonly kind: 'read'; readonly bytes: number; readonly totalBytes: number }
   | { readonly kind: 'level'; readonly n: number; readonly active: number };
-export type ProgressCallback = (progress: AnalysisProgress) => void;
+/** Rows of the per-n table finished since the last such report (in the run's unit), for the partial view. */
+export interface RowsReport {
+  readonly kind: 'rows';
+  readonly rows: readonly LengthRow[];
+}
+export type AnalysisReport = AnalysisProgress | RowsReport;
+export type ProgressCallback = (report: AnalysisReport) => void;
 export type FileReadOptions = ReaderOptions & { readonly name: string };
 
 /** Report reading progress about every 4 MiB. */
 const READ_REPORT_BYTES = 1 << 22;
+/** Least time between two row reports: about 10 a second at most, so the page redraws calmly. */
+const ROW_REPORT_MS = 100;
+
+/** Level hooks that report progress per level and the finished table rows, coalesced (rowThrottle.ts). */
+function levelHooks(settings: AnalysisSettings, onProgress: ProgressCallback): Pick<AnalysisHooks, 'onLevel' | 'onLevelStats'> {
+  const throttle = createRowThrottle<LengthRow>(ROW_REPORT_MS, (rows) => onProgress({ kind: 'rows', rows }));
+  let previous: LevelStats | null = null;
+  return {
+    onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
+    onLevelStats: (level) => {
+      throttle.push(lengthRowOfLevel(level, previous, settings.unit), performance.now());
+      previous = level;
+      // The scan always ends with n = maxN; the estimates that follow may take a while.
+      if (level.n === settings.maxN) throttle.flush();
+    },
+  };
+}
 
 async function readBlob(blob: Blob, options: ReaderOptions, onProgress: ProgressCallback): Promise<ReadResult & { sha256: string }> {
   const reader = createDigestingReader({ ...options, sizeHint: blob.size });
@@ -47,9 +71,7 @@ const api = {
     try {
       const { name, ...readerOptions } = options;
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
-      const result = analyzeSequence(read.sequence, { name, sha256: read.sha256, format: readerOptions.format }, settings, {
-        onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
-      });
+      const result = analyzeSequence(read.sequence, { name, sha256: read.sha256, format: readerOptions.format }, settings, levelHooks(settings, onProgress));
       return read.warnings.length === 0 ? result : { ...result, warnings: [...read.warnings, ...result.warnings] };
     } finally {
       release(onProgress);
@@ -62,7 +84,7 @@ const api = {
       const demo = demoScenario(id);
       const { entropyRate, sigma2 } = demo.source.facts;
       return analyzeSequence(demo.source.generate(length, seed), { name: demo.title, sha256: null, format: 'generated' }, settings, {
-        onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
+        ...levelHooks(settings, onProgress),
         reference: { source: demo.title, entropyRateNats: entropyRate, sigma2Nats: sigma2 },
       });
     } finally {

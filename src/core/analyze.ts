@@ -39,6 +39,10 @@ import { varianceGrowth } from './estimate/varianceGrowth';
 export interface AnalysisHooks {
   /** Called after each block length n with the number of positions still in play. */
   readonly onLevel?: (n: number, active: number) => void;
+  /** Called after each block length with its level statistics (after onLevel), for hosts that show
+   * results level by level (lengthRowOfLevel builds the table row). The level is the scan's own:
+   * read it, do not keep mutating it. */
+  readonly onLevelStats?: (level: LevelStats, active: number) => void;
   /** Polled during the scan; returning true abandons it with ScanCancelled. */
   readonly shouldStop?: () => boolean;
   /** Facts of the reference source the sequence was generated from, in nats; the result states them
@@ -105,11 +109,18 @@ export function analyzeSequence(
 ): AnalysisResult {
   const N = sequence.symbols.length;
   validateSettings(settings, N);
-  const onLevel = hooks.onLevel;
+  const { onLevel, onLevelStats } = hooks;
   const options: ScanOptions = {
     maxN: settings.maxN,
     ...(hooks.pathSamples === undefined ? {} : { sampleTarget: hooks.pathSamples }),
-    ...(onLevel === undefined ? {} : { onLevel: (level, active) => onLevel(level.n, active) }),
+    ...(onLevel === undefined && onLevelStats === undefined
+      ? {}
+      : {
+          onLevel: (level, active) => {
+            onLevel?.(level.n, active);
+            onLevelStats?.(level, active);
+          },
+        }),
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
   };
   const scan = scanReturns(sequence.symbols, sequence.alphabet.length, options);

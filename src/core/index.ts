@@ -43,6 +43,7 @@ export { PROGRAM_VERSION } from './result/version';
 export { alphabetSummary, ALPHABET_LISTED } from './result/alphabetSummary';
 export type { SymbolCount } from './result/alphabetSummary';
 export { lengthsCsv } from './result/lengthsCsv';
+export { lengthRowOfLevel } from './estimate/lengthRowOfLevel';
 export { capturedReturnsCsv } from './result/returnsCsv';
 export { entropyFromNats, varianceFromNats, rateUnitLabel, varianceUnitLabel } from './estimate/units';
 export { EULER_GAMMA, LOG_EXPONENTIAL_VARIANCE } from './estimate/exponentialLaw';

@@ -1,4 +1,4 @@
-import { entropyFromNats, type AnalysisResult } from '../core';
+import { entropyFromNats, type AnalysisResult, type EntropyUnit, type LengthRow } from '../core';
 import { bandPath, type BandPoint, type CurvePoint } from './curvePath';
 import { lineMark } from './lineMark';
 import type { Figure, FigureSize, LegendEntry, LineMark, ReadoutStop } from './figureModel';
@@ -21,6 +21,43 @@ export interface ConvergenceOptions {
   readonly showPaths?: boolean;
 }
 
+/** What the convergence figure draws: per-n rows and, for a finished result, its paths, estimate,
+ * exact value and trusted range. */
+export interface ConvergenceData {
+  readonly rows: readonly LengthRow[];
+  /** Unit of the rows' entropies. */
+  readonly unit: EntropyUnit;
+  /** Right end of the n axis: the last row's n for a result, the run's maxN while rows arrive. */
+  readonly maxN: number;
+  /** Sampled paths (log R in nats), or null when there are none yet. */
+  readonly paths: AnalysisResult['paths'] | null;
+  readonly estimate: number | null;
+  readonly exact: number | null;
+  readonly trustedRange: AnalysisResult['trustedRange'];
+  /** True for the rows of a run still going or cancelled: the title says so. */
+  readonly partial: boolean;
+}
+
+/** A finished result as convergence data. */
+export function convergenceDataOfResult(result: AnalysisResult): ConvergenceData {
+  const rows = result.lengths;
+  return {
+    rows,
+    unit: result.settings.unit,
+    maxN: rows[rows.length - 1]?.n ?? 1,
+    paths: result.paths,
+    estimate: Number.isFinite(result.entropy.estimate) ? result.entropy.estimate : null,
+    exact: result.reference?.entropyRate ?? null,
+    trustedRange: result.trustedRange,
+    partial: false,
+  };
+}
+
+/** Rows of a run still going (or cancelled): no paths, estimate or trusted range yet, axis up to maxN. */
+export function partialConvergenceData(rows: readonly LengthRow[], unit: EntropyUnit, maxN: number): ConvergenceData {
+  return { rows, unit, maxN: Math.max(maxN, rows[rows.length - 1]?.n ?? 1), paths: null, estimate: null, exact: null, trustedRange: null, partial: true };
+}
+
 /**
  * log R_n(x) / n against n: the sampled paths, the mean and the 25–75% and 5–95% bands of
  * log R_n / n from the per-n histograms, the plug-in H_n / n and conditional H_n − H_(n−1), the
@@ -28,23 +65,25 @@ export interface ConvergenceOptions {
  * (paths and quantiles are stored in nats and converted here).
  */
 export function convergenceFigure(result: AnalysisResult, size: FigureSize, options: ConvergenceOptions = {}): Figure {
-  const rows = result.lengths;
-  if (rows.length === 0) return { kind: 'unavailable', message: 'The result has no block lengths to plot.' };
-  const unit = result.settings.unit;
+  if (result.lengths.length === 0) return { kind: 'unavailable', message: 'The result has no block lengths to plot.' };
+  return convergenceFigureOfRows(convergenceDataOfResult(result), size, options);
+}
+
+/** The convergence figure from rows (a result's, or the partial rows of a running run). */
+export function convergenceFigureOfRows(data: ConvergenceData, size: FigureSize, options: ConvergenceOptions = {}): Figure {
+  const { rows, unit, maxN, exact, estimate } = data;
+  if (rows.length === 0) return { kind: 'unavailable', message: 'No block length has finished yet.' };
   const toUnit = (nats: number | null): number | null => (nats === null ? null : entropyFromNats(nats, unit));
   const rate = (nats: number | null, n: number): number | null => (nats === null ? null : (toUnit(nats) as number) / n);
-  const maxN = rows[rows.length - 1]?.n ?? 1;
 
   const mean: CurvePoint[] = rows.map((r) => ({ x: r.n, y: rate(r.meanLogReturnCorrected ?? r.meanLogReturn, r.n) }));
   const plugin: CurvePoint[] = rows.map((r) => ({ x: r.n, y: r.blockEntropyMillerMadow / r.n }));
   const conditional: CurvePoint[] = rows.map((r) => ({ x: r.n, y: r.conditionalEntropy }));
-  const quantile = (r: (typeof rows)[number], k: number): number | null => rate(r.quantilesLogReturn[k] ?? null, r.n);
+  const quantile = (r: LengthRow, k: number): number | null => rate(r.quantilesLogReturn[k] ?? null, r.n);
   const inner: BandPoint[] = rows.map((r) => ({ x: r.n, lower: quantile(r, Q25), upper: quantile(r, Q75) }));
   const outer: BandPoint[] = rows.map((r) => ({ x: r.n, lower: quantile(r, Q05), upper: quantile(r, Q95) }));
-  const exact = result.reference?.entropyRate ?? null;
-  const estimate = Number.isFinite(result.entropy.estimate) ? result.entropy.estimate : null;
   const showPaths = options.showPaths ?? true;
-  const curves = showPaths ? pathCurves(result.paths, (n, v) => entropyFromNats(v, unit) / n, maxN) : [];
+  const curves = showPaths && data.paths !== null ? pathCurves(data.paths, (n, v) => entropyFromNats(v, unit) / n, maxN) : [];
 
   // The y range covers the summaries and bands; single paths far outside are clipped by the renderer.
   const values: number[] = [0];
@@ -80,7 +119,7 @@ export function convergenceFigure(result: AnalysisResult, size: FigureSize, opti
     { id: 'band-inner', label: '25–75% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY * 1.8, path: bandPath(inner, x, y) },
   ];
   const layer = pathLayer(curves, x, y, STYLES.samplePath, `Sampled positions (${curves.length})`);
-  const spans = trustedSpan(result, x);
+  const spans = trustedSpan(data, x);
 
   const legend: LegendEntry[] = [];
   if (layer !== null) legend.push(legendEntry(layer.id, layer.label, 'paths', layer.style));
@@ -101,11 +140,11 @@ export function convergenceFigure(result: AnalysisResult, size: FigureSize, opti
   }));
 
   const notes: string[] = [];
-  if (showPaths && curves.length === 0) notes.push('No sampled paths in this result (a large saved result keeps only its summaries).');
+  if (showPaths && data.paths !== null && curves.length === 0) notes.push('No sampled paths in this result (a large saved result keeps only its summaries).');
   return {
     kind: 'figure',
     model: {
-      title: 'Convergence of log R_n / n',
+      title: data.partial ? `Convergence of log R_n / n (partial: n = 1..${rows[rows.length - 1]?.n ?? 0})` : 'Convergence of log R_n / n',
       description: `log R_n(x) / n against block length n in ${rateUnit}, for ${curves.length} sampled positions, with the mean, quantile bands, plug-in and conditional block entropies${exact === null ? '' : ' and the exact entropy rate'}.`,
       size,
       plot,

@@ -4,7 +4,7 @@ import { round2 } from './linearAxis';
 import type { SpanMark } from './figureModel';
 
 /** The trusted block lengths lo..hi as a shaded stretch, half a step beyond each end, kept inside the axis. */
-export function trustedSpan(result: AnalysisResult, x: ScaleLinear<number, number>): SpanMark[] {
+export function trustedSpan(result: Pick<AnalysisResult, 'trustedRange'>, x: ScaleLinear<number, number>): SpanMark[] {
   const range = result.trustedRange;
   if (range === null) return [];
   const [d0, d1] = x.domain() as [number, number];

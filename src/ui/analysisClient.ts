@@ -1,14 +1,16 @@
 import { proxy, transfer, wrap } from 'comlink';
 import type { Remote } from 'comlink';
-import type { AnalysisResult, AnalysisSettings } from '../core';
-import type { AnalysisApi, AnalysisProgress, FileReadOptions } from '../../workers/analysis.worker';
+import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
+import type { AnalysisApi, AnalysisProgress, AnalysisReport, FileReadOptions } from '../../workers/analysis.worker';
 
-export type { AnalysisProgress, FileReadOptions };
+export type { AnalysisProgress, AnalysisReport, FileReadOptions };
 
-/** Every call can be stopped; progress is optional. */
+/** Every call can be stopped; progress and partial rows are optional. */
 export interface CallOptions {
   readonly signal: AbortSignal;
   readonly onProgress?: (progress: AnalysisProgress) => void;
+  /** Per-n table rows as the scan finishes them (a few at a time, at most about 10 batches a second). */
+  readonly onRows?: (rows: readonly LengthRow[]) => void;
 }
 
 /**
@@ -37,7 +39,14 @@ function abortError(signal: AbortSignal): unknown {
   return signal.reason ?? new DOMException('The analysis was cancelled.', 'AbortError');
 }
 
-const ignoreProgress = (): void => {};
+/** One proxied callback carries both kinds of report; this splits them to the call's two listeners. */
+function reportListener(options: CallOptions): (report: AnalysisReport) => void {
+  const { onProgress, onRows } = options;
+  return (report) => {
+    if (report.kind === 'rows') onRows?.(report.rows);
+    else onProgress?.(report);
+  };
+}
 
 /** A client that starts its worker lazily with `start` (default: workers/analysis.worker.ts as a module worker). */
 export function createAnalysisClient(start: () => WorkerLike = startAnalysisWorker): AnalysisClient {
@@ -67,11 +76,11 @@ export function createAnalysisClient(start: () => WorkerLike = startAnalysisWork
     return remote;
   };
 
-  const call = <T>(options: CallOptions, run: (api: Remote<AnalysisApi>, onProgress: (p: AnalysisProgress) => void) => Promise<T>): Promise<T> => {
+  const call = <T>(options: CallOptions, run: (api: Remote<AnalysisApi>, onReport: (r: AnalysisReport) => void) => Promise<T>): Promise<T> => {
     const { signal } = options;
     if (signal.aborted) return Promise.reject(abortError(signal));
     const api = ensure();
-    const onProgress = proxy(options.onProgress ?? ignoreProgress);
+    const onReport = proxy(reportListener(options));
     return new Promise<T>((resolve, reject) => {
       const onAbort = (): void => stop(abortError(signal));
       const settle = (): void => {
@@ -80,7 +89,7 @@ export function createAnalysisClient(start: () => WorkerLike = startAnalysisWork
       };
       pending.add(reject);
       signal.addEventListener('abort', onAbort, { once: true });
-      run(api, onProgress).then(
+      run(api, onReport).then(
         (value) => {
           settle();
           resolve(value);

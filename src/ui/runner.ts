@@ -1,7 +1,7 @@
 import { PREVIEW_BYTES, previewHead, SNIFF_BYTES } from '../core';
-import type { AnalysisResult, AnalysisSettings } from '../core';
+import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
 import { demoScenario } from '../../workers/demoScenarios';
-import type { AnalysisClient, AnalysisProgress } from './analysisClient';
+import type { AnalysisClient, AnalysisProgress, CallOptions } from './analysisClient';
 import { createAnalysisClient } from './analysisClient';
 import { DEFAULT_DEMO } from './store/inputSlice';
 import { previewOptionsFor, readerOptionsFor } from './view/inputOptions';
@@ -22,7 +22,9 @@ export interface Runner {
   cancel(): void;
 }
 
-type Call = (signal: AbortSignal, onProgress: (p: AnalysisProgress) => void, settings: AnalysisSettings) => Promise<AnalysisResult>;
+/** What a run listens to while it goes: progress and the finished rows of the per-n table. */
+type Listeners = Pick<CallOptions, 'onProgress' | 'onRows'>;
+type Call = (signal: AbortSignal, listeners: Listeners, settings: AnalysisSettings) => Promise<AnalysisResult>;
 
 function errorMessage(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
@@ -39,9 +41,10 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     const own = new AbortController();
     controller = own;
     const { settings } = store.getState();
-    const id = actions.beginRun(label, settings.maxN);
+    const id = actions.beginRun(label, settings.maxN, Date.now(), settings.unit);
+    const listeners = { onProgress: (p: AnalysisProgress) => actions.reportProgress(id, p), onRows: (rows: readonly LengthRow[]) => actions.addPartialRows(id, rows) };
     try {
-      const result = await call(own.signal, (p) => actions.reportProgress(id, p), settings);
+      const result = await call(own.signal, listeners, settings);
       actions.completeRun(id, result);
     } catch (error) {
       if (own.signal.aborted) actions.cancelRun(id);
@@ -78,10 +81,10 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
 
   const runFile = (f: File): Promise<void> => {
     const { reading } = store.getState();
-    return execute(`“${f.name}”`, async (signal, onProgress, settings) => {
+    return execute(`“${f.name}”`, async (signal, listeners, settings) => {
       const text = reading.format === 'auto' ? await f.slice(0, SNIFF_BYTES).text() : '';
       const options = { ...readerOptionsFor(f.name, text, reading), name: f.name };
-      return client.analyzeFile(f, options, settings, { signal, onProgress });
+      return client.analyzeFile(f, options, settings, { signal, ...listeners });
     });
   };
 
@@ -94,7 +97,7 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
 
   const runDemo = (id: string, length: number, seed: number): Promise<void> => {
     const { title } = demoScenario(id);
-    return execute(title, (signal, onProgress, settings) => client.analyzeDemo(id, length, seed, settings, { signal, onProgress }));
+    return execute(title, (signal, listeners, settings) => client.analyzeDemo(id, length, seed, settings, { signal, ...listeners }));
   };
 
   return {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
-import { convergenceFigure } from '../../src/figures/convergenceFigure';
+import { convergenceDataOfResult, convergenceFigure, convergenceFigureOfRows, partialConvergenceData } from '../../src/figures/convergenceFigure';
 import type { FigureModel } from '../../src/figures/figureModel';
 import { fakeResult, lengthRow } from '../ui/fixtures';
 
@@ -60,5 +60,33 @@ describe('convergenceFigure', () => {
 
   it('says why there is no figure for a result without block lengths', () => {
     expect(convergenceFigure(fakeResult({ lengths: [] }), SIZE)).toEqual({ kind: 'unavailable', message: 'The result has no block lengths to plot.' });
+  });
+});
+
+describe('convergenceFigureOfRows', () => {
+  it('draws a result\'s data exactly as convergenceFigure does', () => {
+    const result = fakeResult({ lengths: rows, reference: { source: 's', entropyRate: 1.25, sigma2: 0.2 } });
+    expect(convergenceFigureOfRows(convergenceDataOfResult(result), SIZE)).toEqual(convergenceFigure(result, SIZE));
+  });
+
+  it('draws partial rows on an n axis up to the run\'s maxN, with no paths, estimate or trusted range, and says they are partial', () => {
+    const m = model(convergenceFigureOfRows(partialConvergenceData(rows.slice(0, 2), 'nat', 10), SIZE));
+    // the axis runs from n = 1 at the plot's left edge to n = 10 at its right: n = 2 sits 1/9 of the way
+    expect(m.x.ticks[m.x.ticks.length - 1]?.value).toBe(10);
+    expect(m.readout[0]?.x).toBeCloseTo(m.plot.left, 2);
+    expect(m.readout[1]?.x).toBeCloseTo(m.plot.left + m.plot.width / 9, 1);
+    expect(m.readout.map((r) => r.n)).toEqual([1, 2]);
+    // same per-n values as the full figure's first two stops
+    const full = model(convergenceFigure(fakeResult({ lengths: rows }), SIZE));
+    expect(m.readout.map((r) => r.rows.map((v) => v.value))).toEqual(full.readout.slice(0, 2).map((r) => r.rows.map((v) => v.value)));
+    expect(m.lines.map((l) => l.id)).toEqual(['mean', 'plugin', 'conditional']);
+    expect(m.pathLayer).toBeNull();
+    expect(m.spans).toEqual([]);
+    expect(m.title).toBe('Convergence of log R_n / n (partial: n = 1..2)');
+    expect(m.notes).toEqual([]);
+  });
+
+  it('says why there is no figure before the first row arrives', () => {
+    expect(convergenceFigureOfRows(partialConvergenceData([], 'nat', 10), SIZE)).toEqual({ kind: 'unavailable', message: 'No block length has finished yet.' });
   });
 });

@@ -1,11 +1,11 @@
 import { expose } from 'comlink';
 import { describe, expect, it } from 'vitest';
-import type { AnalysisResult } from '../../src/core/result/analysisResult';
+import type { AnalysisResult, LengthRow } from '../../src/core/result/analysisResult';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
-import type { AnalysisProgress } from '../../src/ui/analysisClient';
+import type { AnalysisProgress, AnalysisReport } from '../../src/ui/analysisClient';
 import { createAnalysisClient } from '../../src/ui/analysisClient';
 import type { WorkerLike } from '../../src/ui/analysisClient';
-import { fakeResult } from './fixtures';
+import { fakeResult, lengthRow } from './fixtures';
 
 /**
  * A stand-in worker on a MessageChannel: the test exposes an api on one port and the client talks to
@@ -54,6 +54,28 @@ describe('analysis client', () => {
     const seen: AnalysisProgress[] = [];
     await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal, onProgress: (p) => seen.push(p) });
     expect(seen).toEqual([{ kind: 'level', n: 2, active: 17 }]);
+    client.dispose();
+  });
+
+  it('hands row reports to onRows and progress to onProgress, through the one proxied callback', async () => {
+    const row = lengthRow(1);
+    const api = {
+      analyzeDemo: (_id: string, _n: number, _seed: number, _s: unknown, onReport: (r: AnalysisReport) => Promise<void>) =>
+        onReport({ kind: 'level', n: 1, active: 9 })
+          .then(() => onReport({ kind: 'rows', rows: [row] }))
+          .then(() => fakeResult()),
+    };
+    const { start } = fakeWorkers(api);
+    const client = createAnalysisClient(start);
+    const progress: AnalysisProgress[] = [];
+    const rows: (readonly LengthRow[])[] = [];
+    await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, {
+      signal: new AbortController().signal,
+      onProgress: (p) => progress.push(p),
+      onRows: (r) => rows.push(r),
+    });
+    expect(progress).toEqual([{ kind: 'level', n: 1, active: 9 }]);
+    expect(rows).toEqual([[row]]);
     client.dispose();
   });
 

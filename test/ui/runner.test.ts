@@ -4,7 +4,7 @@ import type { AnalysisClient, CallOptions } from '../../src/ui/analysisClient';
 import { createRunner, openDemoIfEmpty } from '../../src/ui/runner';
 import { DEFAULT_DEMO } from '../../src/ui/store/inputSlice';
 import { DEMO_SCENARIOS } from '../../workers/demoScenarios';
-import { fakeResult } from './fixtures';
+import { fakeResult, lengthRow } from './fixtures';
 import { testStore } from './store/testStore';
 
 interface PendingCall {
@@ -46,10 +46,13 @@ describe('runner', () => {
     expect(call?.args).toEqual([DEFAULT_DEMO.id, 5_000, DEFAULT_DEMO.seed, s.store.getState().settings]);
     call?.call.onProgress?.({ kind: 'level', n: 4, active: 321 });
     expect(s.store.getState().run).toMatchObject({ status: 'running', progress: { kind: 'level', n: 4, active: 321 } });
+    call?.call.onRows?.([lengthRow(1), lengthRow(2)]);
+    expect(s.store.getState().partial).toMatchObject({ status: 'running', unit: s.store.getState().settings.unit, rows: [{ n: 1 }, { n: 2 }] });
     const result = fakeResult();
     call?.resolve(result);
     await done;
     expect(s.store.getState().result).toBe(result);
+    expect(s.store.getState().partial).toBeNull();
     expect(s.store.getState().chosen).toEqual({ kind: 'demo', id: DEFAULT_DEMO.id, length: 5_000, seed: DEFAULT_DEMO.seed });
   });
 

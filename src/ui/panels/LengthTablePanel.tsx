@@ -1,16 +1,21 @@
 import { useMemo } from 'react';
-import type { AnalysisResult } from '../../core';
 import { useAppState } from '../store/store';
-import { lengthTableView } from '../view/lengthTableView';
+import { lengthRowsView, lengthTableView, type LengthTableView } from '../view/lengthTableView';
+import { partialLabel } from '../view/partialLabel';
 
-function LengthTable({ result }: { readonly result: AnalysisResult }) {
-  const view = useMemo(() => lengthTableView(result), [result]);
+function LengthTable({ view, partial }: { readonly view: LengthTableView; readonly partial: string | null }) {
   return (
     <div className="table-scroll" tabIndex={0} role="region" aria-label="Per block length table, scrollable">
-      <table className="compact lengths">
+      <table className="compact lengths" data-testid="length-table" data-partial={partial !== null}>
         <caption>
-          One row per block length n; rows marked ● form the trusted range of the return-time estimators. Entropies in {view.unit}/symbol,
-          log R in nats.
+          {partial !== null ? (
+            <span className="partial-note" data-testid="length-table-partial">
+              {partial}
+            </span>
+          ) : (
+            <>One row per block length n; rows marked ● form the trusted range of the return-time estimators. </>
+          )}
+          {' '}Entropies in {view.unit}/symbol, log R in nats.
         </caption>
         <thead>
           <tr>
@@ -54,13 +59,23 @@ function LengthTable({ result }: { readonly result: AnalysisResult }) {
   );
 }
 
-/** The compact per-n table of the last result. */
+/** The compact per-n table: the running run's rows as they arrive (or a cancelled run's), else the last result's. */
 export function LengthTablePanel() {
   const result = useAppState((s) => s.result);
+  const partial = useAppState((s) => s.partial);
+  const view = useMemo(() => {
+    if (partial !== null) return lengthRowsView(partial.rows, null, partial.unit);
+    return result === null ? null : lengthTableView(result);
+  }, [partial, result]);
+  const label = partial === null ? null : partialLabel(partial);
+  let body;
+  if (view === null) body = <p className="muted">The per-n table appears with the first result.</p>;
+  else if (view.rows.length === 0) body = <p className="muted partial-note" data-testid="length-table-partial">{label}</p>;
+  else body = <LengthTable view={view} partial={label} />;
   return (
-    <section className="panel" aria-labelledby="lengths-heading">
+    <section className="panel" aria-labelledby="lengths-heading" aria-busy={partial?.status === 'running'}>
       <h2 id="lengths-heading">By block length</h2>
-      {result === null ? <p className="muted">The per-n table appears with the first result.</p> : <LengthTable result={result} />}
+      {body}
     </section>
   );
 }

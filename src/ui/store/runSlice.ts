@@ -1,4 +1,4 @@
-import type { AnalysisResult } from '../../core';
+import type { AnalysisResult, EntropyUnit, LengthRow } from '../../core';
 import type { AnalysisProgress } from '../analysisClient';
 import type { StoreHandle } from './store';
 
@@ -43,6 +43,23 @@ export function trackLevel(track: LevelTrack | null, active: number, atMs: numbe
   };
 }
 
+/**
+ * The per-n rows a run has finished so far, drawn by the table and the convergence figure until its
+ * result arrives. A cancelled run keeps them (status 'cancelled') until the next run starts: nothing
+ * computed is thrown away.
+ */
+export interface PartialRows {
+  readonly runId: number;
+  readonly label: string;
+  /** Unit of the rows' entropies: the run's, which the settings may no longer show. */
+  readonly unit: EntropyUnit;
+  /** The run's maxN, so the figure's n axis stays put while rows arrive. */
+  readonly maxN: number;
+  /** Rows n = 1..k in order. */
+  readonly rows: readonly LengthRow[];
+  readonly status: 'running' | 'cancelled';
+}
+
 /** A failed run, told in plain words; `message` is the core's message, unchanged. */
 export interface RunFailure {
   readonly title: string;
@@ -53,9 +70,18 @@ export interface RunState {
   readonly run: RunPhase;
   readonly failure: RunFailure | null;
   readonly lastRunId: number;
+  /** Rows of the running (or last cancelled) run; null when there are none to show. */
+  readonly partial: PartialRows | null;
 }
 
-export const initialRunState: RunState = { run: { status: 'idle', note: null }, failure: null, lastRunId: 0 };
+export const initialRunState: RunState = { run: { status: 'idle', note: null }, failure: null, lastRunId: 0, partial: null };
+
+/** The note shown after a cancel: where the scan stopped, and what stays on screen. */
+export function cancelNote(partial: PartialRows | null): string {
+  const last = partial?.rows[partial.rows.length - 1];
+  if (partial === null || last === undefined) return 'Cancelled; the previous result stays shown.';
+  return `Cancelled at n = ${last.n} of ${partial.maxN}; the rows n = 1..${last.n} stay in the table and figure, the previous result in the summary.`;
+}
 
 /** Whether an error is the cancellation of a run (an AbortError from the client or the signal). */
 export function isAbortError(error: unknown): boolean {
@@ -81,10 +107,31 @@ export function runActions(store: StoreHandle) {
   };
   return {
     /** Marks a new run as started and returns its id; reports for older ids are ignored from now on. */
-    beginRun(label: string, maxN: number, atMs: number = Date.now()): number {
+    beginRun(label: string, maxN: number, atMs: number = Date.now(), unit: EntropyUnit = 'nat'): number {
       const id = store.getState().lastRunId + 1;
-      store.setState({ run: { status: 'running', id, label, maxN, progress: null, startedAtMs: atMs, levels: null }, failure: null, lastRunId: id });
+      store.setState({
+        run: { status: 'running', id, label, maxN, progress: null, startedAtMs: atMs, levels: null },
+        failure: null,
+        lastRunId: id,
+        partial: { runId: id, label, unit, maxN, rows: [], status: 'running' },
+      });
       return id;
+    },
+    /** Appends rows of the current run; rows that do not continue n = 1..k (repeats, gaps, old runs) are ignored. */
+    addPartialRows(id: number, rows: readonly LengthRow[]): void {
+      store.setState((s) => {
+        const partial = s.partial;
+        if (!isCurrent(id) || partial?.runId !== id) return s;
+        const added: LengthRow[] = [];
+        let next = partial.rows.length + 1;
+        for (const row of rows) {
+          if (row.n !== next) continue;
+          added.push(row);
+          next++;
+        }
+        if (added.length === 0) return s;
+        return { partial: { ...partial, rows: [...partial.rows, ...added] } };
+      });
     },
     /** Stores the latest report; level reports also feed the time-left track. */
     reportProgress(id: number, progress: AnalysisProgress, atMs: number = Date.now()): void {
@@ -97,16 +144,19 @@ export function runActions(store: StoreHandle) {
     /** Stores the result (replacing the previous snapshot) and returns to idle. */
     completeRun(id: number, result: AnalysisResult): void {
       if (!isCurrent(id)) return;
-      store.setState({ run: { status: 'idle', note: null }, result, pathsDropped: false });
+      store.setState({ run: { status: 'idle', note: null }, result, pathsDropped: false, partial: null });
     },
+    /** Back to idle; rows already computed stay shown, marked as cancelled. */
     cancelRun(id: number): void {
       if (!isCurrent(id)) return;
-      store.setState({ run: { status: 'idle', note: 'Cancelled; the previous result stays shown.' } });
+      const { partial } = store.getState();
+      const kept = partial !== null && partial.runId === id && partial.rows.length > 0 ? { ...partial, status: 'cancelled' as const } : null;
+      store.setState({ run: { status: 'idle', note: cancelNote(kept) }, partial: kept });
     },
     failRun(id: number, error: unknown): void {
       const { run } = store.getState();
       if (!isCurrent(id) || run.status !== 'running') return;
-      store.setState({ run: { status: 'idle', note: null }, failure: describeFailure(error, run.label) });
+      store.setState({ run: { status: 'idle', note: null }, failure: describeFailure(error, run.label), partial: null });
     },
     dismissFailure(): void {
       store.setState({ failure: null });

@@ -100,6 +100,7 @@ export const {
   resetSettings,
   beginRun,
   reportProgress,
+  addPartialRows,
   completeRun,
   cancelRun,
   failRun,

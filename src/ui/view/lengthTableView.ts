@@ -1,4 +1,4 @@
-import type { AnalysisResult } from '../../core';
+import type { AnalysisResult, LengthRow } from '../../core';
 import { DEFAULT_DECIMALS, formatCount, formatFixed, formatPercent } from './format';
 
 export interface LengthTableRow {
@@ -12,10 +12,19 @@ export interface LengthTableRow {
   readonly distinctBlocks: string;
 }
 
+export interface LengthTableView {
+  readonly unit: string;
+  readonly rows: readonly LengthTableRow[];
+}
+
 /** The compact per-n table: one row per block length, rows inside the trusted range marked. */
-export function lengthTableView(result: AnalysisResult): { readonly unit: string; readonly rows: readonly LengthTableRow[] } {
-  const range = result.trustedRange;
-  const rows = result.lengths.map((row) => ({
+export function lengthTableView(result: AnalysisResult): LengthTableView {
+  return lengthRowsView(result.lengths, result.trustedRange, result.settings.unit);
+}
+
+/** The same table from rows alone (a running run's partial rows have no trusted range yet: pass null). */
+export function lengthRowsView(lengths: readonly LengthRow[], range: AnalysisResult['trustedRange'], unit: string): LengthTableView {
+  const rows = lengths.map((row) => ({
     n: row.n,
     inTrustedRange: range !== null && row.n >= range.lo && row.n <= range.hi,
     positions: formatCount(row.positions),
@@ -25,5 +34,5 @@ export function lengthTableView(result: AnalysisResult): { readonly unit: string
     conditionalEntropy: formatFixed(row.conditionalEntropy, DEFAULT_DECIMALS),
     distinctBlocks: formatCount(row.distinctBlocks),
   }));
-  return { unit: result.settings.unit, rows };
+  return { unit, rows };
 }

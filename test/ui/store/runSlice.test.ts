@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { ReadError } from '../../../src/core/sequence/readError';
 import { describeFailure, isAbortError } from '../../../src/ui/store/runSlice';
-import { fakeResult } from '../fixtures';
+import { fakeResult, lengthRow } from '../fixtures';
 import { testStore } from './testStore';
 
 describe('run slice', () => {
@@ -84,5 +84,64 @@ describe('run slice', () => {
     expect(isAbortError(new DOMException('stop', 'AbortError'))).toBe(true);
     expect(isAbortError(new Error('AbortError'))).toBe(false);
     expect(isAbortError(null)).toBe(false);
+  });
+
+  it('beginRun starts an empty partial table in the run\'s unit; addPartialRows appends rows n = 1..k in order', () => {
+    // source: API contract (runSlice.ts)
+    const s = testStore();
+    const id = s.beginRun('chain', 12, 0, 'bit');
+    expect(s.store.getState().partial).toEqual({ runId: id, label: 'chain', unit: 'bit', maxN: 12, rows: [], status: 'running' });
+    s.addPartialRows(id, [lengthRow(1), lengthRow(2)]);
+    const before = s.store.getState().partial;
+    s.addPartialRows(id, [lengthRow(2), lengthRow(4)]); // a repeat and a gap: ignored, state unchanged
+    expect(s.store.getState().partial).toBe(before);
+    s.addPartialRows(id, [lengthRow(3)]);
+    expect(s.store.getState().partial?.rows.map((r) => r.n)).toEqual([1, 2, 3]);
+    // Snapshots are replaced, never mutated.
+    expect(before?.rows.map((r) => r.n)).toEqual([1, 2]);
+  });
+
+  it('rows of an older run are ignored, and a new run starts from an empty partial table', () => {
+    const s = testStore();
+    const old = s.beginRun('old', 12);
+    s.addPartialRows(old, [lengthRow(1)]);
+    const current = s.beginRun('new', 12);
+    s.addPartialRows(old, [lengthRow(2)]);
+    expect(s.store.getState().partial).toMatchObject({ runId: current, rows: [] });
+  });
+
+  it('completeRun and failRun clear the partial rows', () => {
+    const s = testStore();
+    const a = s.beginRun('a', 12);
+    s.addPartialRows(a, [lengthRow(1)]);
+    s.completeRun(a, fakeResult());
+    expect(s.store.getState().partial).toBeNull();
+    const b = s.beginRun('b', 12);
+    s.addPartialRows(b, [lengthRow(1)]);
+    s.failRun(b, new Error('bad'));
+    expect(s.store.getState().partial).toBeNull();
+  });
+
+  it('cancelRun keeps the rows computed so far, marked cancelled, with a note naming where it stopped', () => {
+    const s = testStore();
+    const result = fakeResult();
+    s.completeRun(s.beginRun('x', 40), result);
+    const id = s.beginRun('y', 40);
+    s.addPartialRows(id, [lengthRow(1), lengthRow(2), lengthRow(3)]);
+    s.cancelRun(id);
+    const state = s.store.getState();
+    expect(state.partial).toMatchObject({ runId: id, status: 'cancelled' });
+    expect(state.partial?.rows).toHaveLength(3);
+    expect(state.run.status === 'idle' && state.run.note).toBe(
+      'Cancelled at n = 3 of 40; the rows n = 1..3 stay in the table and figure, the previous result in the summary.',
+    );
+    expect(state.result).toBe(result);
+  });
+
+  it('cancelRun before any row finished leaves no partial table', () => {
+    const s = testStore();
+    s.cancelRun(s.beginRun('y', 40));
+    expect(s.store.getState().partial).toBeNull();
+    expect(s.store.getState().run).toEqual({ status: 'idle', note: 'Cancelled; the previous result stays shown.' });
   });
 });
