@@ -1,28 +1,11 @@
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
-import type { Locator, Page } from '@playwright/test';
+import type { Locator } from '@playwright/test';
 import { twoStateChainText } from './sequenceFiles';
+import { collectErrors, shoot } from './pageWatch';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
-
-function collectErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('console', (message) => {
-    if (message.type() === 'error') errors.push(`console: ${message.text()}`);
-  });
-  page.on('pageerror', (error) => errors.push(`page error: ${error.message}`));
-  return errors;
-}
-
-async function shoot(target: Locator, name: string): Promise<void> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  await target.scrollIntoViewIfNeeded();
-  await target.screenshot({ path: join(SCREENSHOTS, `${name}.png`) });
-}
 
 /** A figure has marks of the given kinds, both axis titles, tick labels and a legend with at least two entries. */
 async function expectFigure(figure: Locator, xTitle: string | RegExp, yTitle: string | RegExp, marks: readonly string[]): Promise<void> {
@@ -103,6 +86,8 @@ test('for a fair coin (σ² = 0) the fluctuation view says so and shows the retu
   const file = join(mkdtempSync(join(tmpdir(), 'returnrate-e2e-')), 'fair-coin.txt');
   writeFileSync(file, twoStateChainText(50_000, [0.5, 0.5], 3));
   await page.getByLabel('Choose a sequence file').setInputFiles(file);
+  await expect(page.getByTestId('preview').getByRole('heading', { level: 2 })).toHaveText('Preview of fair-coin.txt');
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
   await expect(page.locator('.input-name')).toHaveText('fair-coin.txt', { timeout: 30_000 });
   await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 60_000 });
   const section = page.locator('section[aria-labelledby="fluctuation-heading"]');

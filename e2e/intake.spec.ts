@@ -1,27 +1,11 @@
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import type { Page } from '@playwright/test';
 import { twoStateChainText } from './sequenceFiles';
+import { collectErrors, screenshot } from './pageWatch';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
-
-function collectErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('console', (message) => {
-    if (message.type() === 'error') errors.push(`console: ${message.text()}`);
-  });
-  page.on('pageerror', (error) => errors.push(`page error: ${error.message}`));
-  return errors;
-}
-
-async function screenshot(page: Page, name: string, fullPage = true): Promise<void> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage });
-}
 
 function tempFile(name: string, text: string): string {
   const path = join(mkdtempSync(join(tmpdir(), 'returnrate-intake-')), name);

@@ -1,25 +1,8 @@
-import { mkdirSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import type { Page } from '@playwright/test';
+import { SCREENSHOTS, collectErrors, screenshot } from './pageWatch';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
-
-function collectErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('console', (message) => {
-    if (message.type() === 'error') errors.push(`console: ${message.text()}`);
-  });
-  page.on('pageerror', (error) => errors.push(`page error: ${error.message}`));
-  return errors;
-}
-
-async function screenshot(page: Page, name: string, fullPage = true): Promise<void> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage });
-}
 
 const runButton = (page: Page) => page.getByRole('button', { name: 'Run', exact: true });
 const tableRows = (page: Page) => page.getByTestId('length-table').locator('tbody tr');

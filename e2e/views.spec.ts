@@ -1,26 +1,7 @@
-import { mkdirSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { expect, test } from '@playwright/test';
-import type { Locator, Page } from '@playwright/test';
+import type { Locator } from '@playwright/test';
+import { collectErrors, shoot } from './pageWatch';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
-
-function collectErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('console', (message) => {
-    if (message.type() === 'error') errors.push(`console: ${message.text()}`);
-  });
-  page.on('pageerror', (error) => errors.push(`page error: ${error.message}`));
-  return errors;
-}
-
-async function shoot(target: Locator, name: string): Promise<void> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  await target.scrollIntoViewIfNeeded();
-  await target.screenshot({ path: join(SCREENSHOTS, `${name}.png`) });
-}
 
 /** A figure has plotted marks, both axis titles with their unit, tick labels and a legend. */
 async function expectFigure(figure: Locator, yTitle: RegExp): Promise<void> {

@@ -1,32 +1,15 @@
 import { execFile } from 'node:child_process';
-import { existsSync, mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { join } from 'node:path';
 import { promisify } from 'node:util';
 import { expect, test } from '@playwright/test';
 import type { Page } from '@playwright/test';
 import { twoStateChainText } from './sequenceFiles';
+import { ROOT, SCREENSHOTS, collectErrors, screenshot } from './pageWatch';
 
-const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
-const SCREENSHOTS = join(ROOT, 'test-results', 'screenshots');
 const CLI = join(ROOT, 'src', 'cli', 'main.ts');
 const run = promisify(execFile);
-
-/** Console errors and uncaught exceptions of the page, collected for the whole test. */
-function collectErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('console', (message) => {
-    if (message.type() === 'error') errors.push(`console: ${message.text()}`);
-  });
-  page.on('pageerror', (error) => errors.push(`page error: ${error.message}`));
-  return errors;
-}
-
-async function screenshot(page: Page, name: string): Promise<void> {
-  mkdirSync(SCREENSHOTS, { recursive: true });
-  await page.screenshot({ path: join(SCREENSHOTS, `${name}.png`), fullPage: true });
-}
 
 function tempFile(name: string, text: string): string {
   const path = join(mkdtempSync(join(tmpdir(), 'returnrate-e2e-')), name);
