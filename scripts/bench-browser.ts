@@ -26,6 +26,34 @@ const SPEC = 'coin';
 // Targets of the workbench issue: seconds from pressing Run to the estimate; main-thread tasks.
 const TIME_TARGET: Record<number, number> = { 1e6: 2, 1e7: 10 };
 const LONG_TASK_MS = 50;
+// BENCH_BROWSER_PROFILE=1: a CPU profile of the main thread from the click to the estimate, its
+// heaviest functions (self time) printed, to find what blocks the page.
+const PROFILE = process.env.BENCH_BROWSER_PROFILE === '1';
+
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+}
+interface Profile {
+  nodes: ProfileNode[];
+  samples: number[];
+  timeDeltas: number[];
+}
+
+function heaviest(profile: Profile, count: number): string[] {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const self = new Map<string, number>();
+  profile.samples.forEach((id, i) => {
+    const f = byId.get(id)?.callFrame;
+    if (f === undefined || f.functionName === '(idle)' || f.functionName === '(program)') return;
+    const key = `${f.functionName || '(anonymous)'} ${f.url.split('/').pop() ?? ''}:${f.lineNumber + 1}`;
+    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0) / 1000);
+  });
+  return [...self.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, count)
+    .map(([k, ms]) => `${ms.toFixed(0).padStart(6)} ms  ${k}`);
+}
 
 async function ensureFile(spec: string, N: number): Promise<string> {
   const path = join(dir, `${spec.replace(/[^a-z0-9]+/gi, '_')}-${N}.txt`);
@@ -124,7 +152,8 @@ async function main(): Promise<void> {
   const files = await Promise.all(sizes.map((N) => ensureFile(SPEC, N)));
 
   process.stdout.write('  building the page (vite build) ...\n');
-  await build({ root: ROOT, logLevel: 'warn' });
+  // Profiling wants readable function names: the profiled build is not minified.
+  await build({ root: ROOT, logLevel: 'warn', ...(PROFILE ? { build: { minify: false } } : {}) });
   const port = await freePort();
   const server = await preview({ root: ROOT, logLevel: 'warn', preview: { host: '127.0.0.1', port, strictPort: true, open: false } });
   const origin = `http://127.0.0.1:${port}`;
@@ -152,7 +181,7 @@ async function main(): Promise<void> {
       await page.addInitScript({ content: PROBES });
       await page.goto(`${origin}/`);
       // The first visit runs the default demo; wait for it so its result is not mistaken for ours.
-      await page.waitForFunction(() => document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null, null, {
+      await page.waitForFunction(`document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null`, null, {
         timeout: 60_000,
       });
       const name = basename(file);
@@ -161,19 +190,29 @@ async function main(): Promise<void> {
       await page.evaluate((n) => {
         (globalThis as unknown as { __bench: { awaited: string } }).__bench.awaited = n;
       }, name);
+      const cdp = PROFILE ? await context.newCDPSession(page) : null;
+      if (cdp !== null) {
+        await cdp.send('Profiler.enable');
+        await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+        await cdp.send('Profiler.start');
+      }
       await page.getByRole('button', { name: 'Run', exact: true }).click();
       try {
-        await page.waitForFunction(() => (globalThis as unknown as { __bench: { doneAt: number | null } }).__bench.doneAt !== null, null, {
+        await page.waitForFunction('globalThis.__bench.doneAt !== null', null, {
           timeout: Number(process.env.BENCH_BROWSER_TIMEOUT_MS ?? 180_000),
           polling: 200,
         });
       } catch (error) {
-        const state = await page.evaluate(() => ({
-          probe: (globalThis as unknown as { __bench: unknown }).__bench,
+        const state: unknown = await page.evaluate(`({
+          probe: globalThis.__bench,
           name: document.querySelector('.input-name')?.textContent,
           status: document.querySelector('[role="status"]')?.textContent,
-        }));
+        })`);
         throw new Error(`no estimate for ${name} (${JSON.stringify(state).slice(0, 2000)})`, { cause: error });
+      }
+      if (cdp !== null) {
+        const { profile } = (await cdp.send('Profiler.stop')) as unknown as { profile: Profile };
+        process.stdout.write(`    main thread, heaviest functions (self time), ${N}:\n${heaviest(profile, 25).map((l) => `      ${l}`).join('\n')}\n`);
       }
       const probe = await page.evaluate(() => (globalThis as unknown as { __bench: { clickAt: number; doneAt: number; longTasks: Measured['longTasks'] } }).__bench);
       const seconds = (probe.doneAt - probe.clickAt) / 1000;
