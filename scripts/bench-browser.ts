@@ -4,15 +4,16 @@
 // (cached like bench.ts's, same folder) is picked through the file input and Run is pressed; the
 // page's own clock measures from the click to the moment the summary shows this file's name and
 // estimate, and a PerformanceObserver for long tasks counts main-thread tasks over 50 ms in that
-// window. Sizes default to 1e6, 1e7; BENCH_BROWSER_SIZES=1e6 limits them. Requests to any other
-// origin are blocked and listed.
-import { existsSync, mkdirSync, statSync } from 'node:fs';
+// window. Sizes default to 1e6, 1e7; BENCH_BROWSER_SIZES=1e6 limits them; BENCH_BROWSER=0 skips
+// the whole part (`npm run bench` runs it after the command-line bench). Requests to any other
+// origin are blocked and listed. The worker's memory is not measured: the page is not
+// cross-origin isolated, so performance.measureUserAgentSpecificMemory is unavailable.
+import { existsSync, mkdirSync, statSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { basename, dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium } from '@playwright/test';
-import type { CDPSession } from '@playwright/test';
 import { build, preview } from 'vite';
 import { parseSourceSpec } from '../src/core/sources/catalog';
 import { writeSequence } from '../src/cli/writeSequence';
@@ -108,45 +109,7 @@ const PROBES = `
 interface Measured {
   seconds: number;
   longTasks: { start: number; duration: number; name: string }[];
-  workerPeakHeapBytes: number | null;
 }
-
-/** Polls the analysis worker's JS heap through the DevTools protocol (flat sessions on the browser). */
-async function watchWorkerHeap(session: CDPSession): Promise<{ stop: () => Promise<number | null> }> {
-  let peak: number | null = null;
-  const workerSessions: string[] = [];
-  session.on('Target.attachedToTarget', (event: { sessionId: string; targetInfo: { type: string } }) => {
-    if (event.targetInfo.type === 'worker') workerSessions.push(event.sessionId);
-  });
-  await session.send('Target.setDiscoverTargets', { discover: true });
-  await session.send('Target.setAutoAttach', { autoAttach: true, waitForDebuggerOnStart: false, flatten: true });
-  let running = true;
-  const loop = (async () => {
-    while (running) {
-      for (const sessionId of workerSessions) {
-        try {
-          // Runtime.getHeapUsage through the browser session, routed to the worker's flat session.
-          const r = (await session.send('Target.sendMessageToTarget' as never, {
-            sessionId,
-            message: JSON.stringify({ id: 1, method: 'Runtime.getHeapUsage' }),
-          } as never)) as unknown;
-          void r;
-        } catch {
-          // The worker may be gone; ignore.
-        }
-      }
-      await new Promise((r) => setTimeout(r, 100));
-    }
-  })();
-  return {
-    stop: async () => {
-      running = false;
-      await loop;
-      return peak;
-    },
-  };
-}
-void watchWorkerHeap;
 
 async function main(): Promise<void> {
   const files = await Promise.all(sizes.map((N) => ensureFile(SPEC, N)));
@@ -212,6 +175,7 @@ async function main(): Promise<void> {
       }
       if (cdp !== null) {
         const { profile } = (await cdp.send('Profiler.stop')) as unknown as { profile: Profile };
+        if (process.env.BENCH_BROWSER_PROFILE_FILE !== undefined) writeFileSync(`${process.env.BENCH_BROWSER_PROFILE_FILE}-${N}.cpuprofile`, JSON.stringify(profile));
         process.stdout.write(`    main thread, heaviest functions (self time), ${N}:\n${heaviest(profile, 25).map((l) => `      ${l}`).join('\n')}\n`);
       }
       const probe = await page.evaluate(() => (globalThis as unknown as { __bench: { clickAt: number; doneAt: number; longTasks: Measured['longTasks'] } }).__bench);
@@ -246,4 +210,5 @@ async function main(): Promise<void> {
   console.log(missed === 0 ? 'browser bench: every target met' : `browser bench: ${missed} of ${rows.length} sizes missed a target`);
 }
 
-await main();
+if (process.env.BENCH_BROWSER === '0') console.log('\nbrowser bench skipped (BENCH_BROWSER=0)');
+else await main();
