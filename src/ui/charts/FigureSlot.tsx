@@ -1,4 +1,4 @@
-import { useMemo, type ReactNode } from 'react';
+import { useDeferredValue, useMemo, type ReactNode } from 'react';
 import type { Figure, FigureSize } from '../../figures';
 import { ChartFrame } from './ChartFrame';
 import { figureHeight, useElementWidth } from './useElementWidth';
@@ -9,7 +9,11 @@ export function FigureSlot({ build, testId }: { readonly build: (size: FigureSiz
   const w = Math.max(260, width);
   const h = figureHeight(width);
   // `build` should be stable (useCallback) so a figure is rebuilt only when its inputs or size change.
-  const figure = useMemo(() => build({ width: w, height: h }), [build, w, h]);
+  // Deferred: a new result first shows its numbers, then the figures are built and drawn in a
+  // render React can interrupt; building and drawing every figure in the store update's own
+  // synchronous render held the main thread about 200 ms at the end of a run (`npm run bench`).
+  const deferredBuild = useDeferredValue(build);
+  const figure = useMemo(() => deferredBuild({ width: w, height: h }), [deferredBuild, w, h]);
   return (
     <div ref={ref} className="figure-slot">
       {figure.kind === 'figure' ? <ChartFrame model={figure.model} testId={testId} /> : <p className="muted" role="note">{figure.message}</p>}

@@ -1,7 +1,7 @@
 import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
 import { createJSONStorage, persist } from 'zustand/middleware';
-import type { StateStorage } from 'zustand/middleware';
+import type { PersistStorage, StateStorage, StorageValue } from 'zustand/middleware';
 import type { StoreApi } from 'zustand/vanilla';
 import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
@@ -26,8 +26,8 @@ const STORAGE_VERSION = 1;
  * last result (see resultForStorage). */
 export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'>;
 
-export function persistedPart(state: AppState): PersistedState {
-  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...resultForStorage(state) };
+export function persistedPart(state: AppState, savedResult: (state: ResultState) => ResultState = resultForStorage): PersistedState {
+  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...savedResult(state) };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
@@ -43,6 +43,49 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
   };
 }
 
+function sameParts(a: PersistedState, b: PersistedState): boolean {
+  return (Object.keys(b) as (keyof PersistedState)[]).every((key) => Object.is(a[key], b[key]));
+}
+
+/**
+ * The saved parts written as JSON, but only when one of them changed. zustand's persist writes on
+ * every update, and a run updates the store once per block length; serializing the last result
+ * and handing it to localStorage each time held the main thread 50 to 350 ms per update at 1e6
+ * symbols (`npm run bench`, browser part). Every part is an immutable snapshot, so comparing
+ * references is enough.
+ */
+function changedPartsStorage(storage: () => StateStorage): PersistStorage<PersistedState> | undefined {
+  const json = createJSONStorage<PersistedState>(storage);
+  if (json === undefined) return undefined;
+  let written: StorageValue<PersistedState> | null = null;
+  return {
+    getItem: (name) => json.getItem(name),
+    setItem: (name, value) => {
+      if (written !== null && written.version === value.version && sameParts(written.state, value.state)) return;
+      written = value;
+      return json.setItem(name, value);
+    },
+    removeItem: (name) => {
+      written = null;
+      return json.removeItem(name);
+    },
+  };
+}
+
+/** persistedPart with the saved form of the result kept per result: measuring its JSON size costs a serialization. */
+function memoPersistedPart(): (state: AppState) => PersistedState {
+  let source: ResultState | null = null;
+  let saved: ResultState = initialResultState;
+  const savedResult = (state: ResultState): ResultState => {
+    if (source === null || source.result !== state.result || source.pathsDropped !== state.pathsDropped) {
+      source = { result: state.result, pathsDropped: state.pathsDropped };
+      saved = resultForStorage(state);
+    }
+    return saved;
+  };
+  return (state) => persistedPart(state, savedResult);
+}
+
 /**
  * One store for the whole page: the four slices' state, saved (settings and last result only) to
  * `storage` under STORAGE_KEY. Tests pass an in-memory storage.
@@ -52,8 +95,8 @@ export function createAppStore(storage: () => StateStorage) {
     persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState }), {
       name: STORAGE_KEY,
       version: STORAGE_VERSION,
-      storage: createJSONStorage(storage),
-      partialize: persistedPart,
+      storage: changedPartsStorage(storage),
+      partialize: memoPersistedPart(),
       merge: mergePersisted,
     }),
   );

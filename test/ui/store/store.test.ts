@@ -43,4 +43,22 @@ describe('app store persistence', () => {
     const saved = JSON.parse(String(storage.getItem(STORAGE_KEY))) as { state: Record<string, unknown> };
     expect(Object.keys(saved.state).sort()).toEqual(['demoLength', 'pathsDropped', 'reading', 'result', 'settings', 'view']);
   });
+
+  it('writes the saved state only when a saved part changes, not on run progress', () => {
+    const storage = memoryStorage();
+    const writes: string[] = [];
+    const counting = { ...storage, setItem: (name: string, value: string) => (writes.push(value), storage.setItem(name, value)) };
+    const s = testStore(counting);
+    const id = s.beginRun('x', 40);
+    const afterBegin = writes.length;
+    s.reportProgress(id, { kind: 'level', n: 1, active: 1000 });
+    s.reportProgress(id, { kind: 'level', n: 2, active: 800 });
+    expect(writes.length).toBe(afterBegin);
+    const result = fakeResult();
+    s.completeRun(id, result);
+    expect(writes.length).toBe(afterBegin + 1);
+    expect(testStore(storage).store.getState().result).toEqual(result);
+    s.updateSettings({ unit: 'bit' });
+    expect(writes.length).toBe(afterBegin + 2);
+  });
 });

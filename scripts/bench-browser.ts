@@ -1,0 +1,219 @@
+// Speed of the workbench in the browser, the user's path: the built page (`vite build`, served by
+// `vite preview`, so the numbers are those of the page users get, not of the dev server's
+// unbundled modules) in Debian's chromium through playwright. For each size a fair-coin file
+// (cached like bench.ts's, same folder) is picked through the file input and Run is pressed; the
+// page's own clock measures from the click to the moment the summary shows this file's name and
+// estimate, and a PerformanceObserver for long tasks counts main-thread tasks over 50 ms in that
+// window. Sizes default to 1e6, 1e7; BENCH_BROWSER_SIZES=1e6 limits them; BENCH_BROWSER=0 skips
+// the whole part (`npm run bench` runs it after the command-line bench). Requests to any other
+// origin are blocked and listed. The worker's memory is not measured: the page is not
+// cross-origin isolated, so performance.measureUserAgentSpecificMemory is unavailable.
+import { existsSync, mkdirSync, statSync, writeFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { basename, dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { chromium } from '@playwright/test';
+import { build, preview } from 'vite';
+import { parseSourceSpec } from '../src/core/sources/catalog';
+import { writeSequence } from '../src/cli/writeSequence';
+
+const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+const sizes = (process.env.BENCH_BROWSER_SIZES ?? '1e6,1e7').split(',').map(Number);
+const dir = process.env.BENCH_DIR ?? join(tmpdir(), 'returnrate-bench');
+mkdirSync(dir, { recursive: true });
+const SPEC = 'coin';
+
+// Targets of the workbench issue: seconds from pressing Run to the estimate; main-thread tasks.
+const TIME_TARGET: Record<number, number> = { 1e6: 2, 1e7: 10 };
+const LONG_TASK_MS = 50;
+// Long tasks are counted until this long after the estimate shows: the figures of the new result are
+// drawn just after it, and long-task entries reach the observer a little after their task ends.
+const SETTLE_MS = 1000;
+// BENCH_BROWSER_PROFILE=1: a CPU profile of the main thread from the click to the estimate, its
+// heaviest functions (self time) printed, to find what blocks the page.
+const PROFILE = process.env.BENCH_BROWSER_PROFILE === '1';
+
+interface ProfileNode {
+  id: number;
+  callFrame: { functionName: string; url: string; lineNumber: number };
+}
+interface Profile {
+  nodes: ProfileNode[];
+  samples: number[];
+  timeDeltas: number[];
+}
+
+function heaviest(profile: Profile, count: number): string[] {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const self = new Map<string, number>();
+  profile.samples.forEach((id, i) => {
+    const f = byId.get(id)?.callFrame;
+    if (f === undefined || f.functionName === '(idle)' || f.functionName === '(program)') return;
+    const key = `${f.functionName || '(anonymous)'} ${f.url.split('/').pop() ?? ''}:${f.lineNumber + 1}`;
+    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0) / 1000);
+  });
+  return [...self.entries()]
+    .sort((a, b) => b[1] - a[1])
+    .slice(0, count)
+    .map(([k, ms]) => `${ms.toFixed(0).padStart(6)} ms  ${k}`);
+}
+
+async function ensureFile(spec: string, N: number): Promise<string> {
+  const path = join(dir, `${spec.replace(/[^a-z0-9]+/gi, '_')}-${N}.txt`);
+  if (existsSync(path) && statSync(path).size >= N) return path;
+  process.stdout.write(`  generating ${N} symbols of ${spec} ...\n`);
+  await writeSequence(parseSourceSpec(spec).generate(N, 2026), path);
+  return path;
+}
+
+function freePort(): Promise<number> {
+  return new Promise((done, fail) => {
+    const s = createServer();
+    s.once('error', fail);
+    s.listen(0, '127.0.0.1', () => {
+      const address = s.address();
+      const port = typeof address === 'object' && address !== null ? address.port : 0;
+      s.close(() => done(port));
+    });
+  });
+}
+
+/**
+ * Runs in the page before its own scripts: records every long task from the start (buffered),
+ * the time of the click on Run (capture phase, before React's handler), and the first moment the
+ * summary shows the awaited file's name with an estimate and the run badge says Idle. Plain
+ * JavaScript text, because tsx's compiled functions call a helper that does not exist in the page.
+ */
+const PROBES = `
+(() => {
+  const probe = { longTasks: [], clickAt: null, doneAt: null, awaited: null };
+  globalThis.__bench = probe;
+  new PerformanceObserver((list) => {
+    for (const e of list.getEntries()) probe.longTasks.push({ start: e.startTime, duration: e.duration, name: e.name });
+  }).observe({ type: 'longtask', buffered: true });
+  const check = () => {
+    if (probe.clickAt === null || probe.doneAt !== null || probe.awaited === null) return;
+    const name = document.querySelector('.input-name')?.textContent;
+    const estimate = document.querySelector('[data-testid="entropy-estimate"]')?.textContent ?? '';
+    const status = document.querySelector('[data-testid="run-status"]')?.textContent;
+    if (name === probe.awaited && /\\d/.test(estimate) && status === 'Idle') probe.doneAt = performance.now();
+  };
+  document.addEventListener('click', (event) => {
+    const button = event.target instanceof Element ? event.target.closest('button') : null;
+    if (button?.textContent?.trim() === 'Run' && probe.awaited !== null && probe.clickAt === null) probe.clickAt = performance.now();
+  }, true);
+  document.addEventListener('DOMContentLoaded', () => {
+    new MutationObserver(check).observe(document.body, { subtree: true, childList: true, characterData: true, attributes: true });
+  });
+})();
+`;
+
+interface LongTask {
+  start: number;
+  duration: number;
+  name: string;
+}
+
+async function main(): Promise<void> {
+  const files = await Promise.all(sizes.map((N) => ensureFile(SPEC, N)));
+
+  process.stdout.write('  building the page (vite build) ...\n');
+  // Profiling wants readable function names: the profiled build is not minified.
+  await build({ root: ROOT, logLevel: 'warn', ...(PROFILE ? { build: { minify: false } } : {}) });
+  const port = await freePort();
+  const server = await preview({ root: ROOT, logLevel: 'warn', preview: { host: '127.0.0.1', port, strictPort: true, open: false } });
+  const origin = `http://127.0.0.1:${port}`;
+
+  const browser = await chromium.launch({
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run'],
+  });
+  const blocked: string[] = [];
+  const rows: string[][] = [];
+  try {
+    for (const [i, N] of sizes.entries()) {
+      const file = files[i]!;
+      const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+      await context.route('**/*', (route) => {
+        const url = route.request().url();
+        if (url.startsWith(`${origin}/`) || url.startsWith('data:') || url.startsWith('blob:')) return route.continue();
+        blocked.push(url);
+        return route.abort('blockedbyclient');
+      });
+      const page = await context.newPage();
+      const errors: string[] = [];
+      page.on('pageerror', (e) => errors.push(e.message));
+      await page.addInitScript({ content: PROBES });
+      await page.goto(`${origin}/`);
+      // The first visit runs the default demo; wait for it so its result is not mistaken for ours.
+      await page.waitForFunction(`document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null`, null, {
+        timeout: 60_000,
+      });
+      const name = basename(file);
+      await page.getByLabel('Choose a sequence file').setInputFiles(file);
+      await page.getByTestId('preview').getByText(`Preview of ${name}`).waitFor();
+      await page.evaluate((n) => {
+        (globalThis as unknown as { __bench: { awaited: string } }).__bench.awaited = n;
+      }, name);
+      const cdp = PROFILE ? await context.newCDPSession(page) : null;
+      if (cdp !== null) {
+        await cdp.send('Profiler.enable');
+        await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
+        await cdp.send('Profiler.start');
+      }
+      await page.getByRole('button', { name: 'Run', exact: true }).click();
+      try {
+        await page.waitForFunction('globalThis.__bench.doneAt !== null', null, {
+          timeout: Number(process.env.BENCH_BROWSER_TIMEOUT_MS ?? 180_000),
+          polling: 200,
+        });
+      } catch (error) {
+        const state: unknown = await page.evaluate(`({
+          probe: globalThis.__bench,
+          name: document.querySelector('.input-name')?.textContent,
+          status: document.querySelector('[role="status"]')?.textContent,
+        })`);
+        throw new Error(`no estimate for ${name} (${JSON.stringify(state).slice(0, 2000)})`, { cause: error });
+      }
+      await page.waitForFunction(`performance.now() > globalThis.__bench.doneAt + ${SETTLE_MS}`, null, { polling: 100 });
+      if (cdp !== null) {
+        const { profile } = (await cdp.send('Profiler.stop')) as unknown as { profile: Profile };
+        if (process.env.BENCH_BROWSER_PROFILE_FILE !== undefined) writeFileSync(`${process.env.BENCH_BROWSER_PROFILE_FILE}-${N}.cpuprofile`, JSON.stringify(profile));
+        process.stdout.write(`    main thread, heaviest functions (self time), ${N}:\n${heaviest(profile, 25).map((l) => `      ${l}`).join('\n')}\n`);
+      }
+      const probe = await page.evaluate(() => (globalThis as unknown as { __bench: { clickAt: number; doneAt: number; longTasks: LongTask[] } }).__bench);
+      const seconds = (probe.doneAt - probe.clickAt) / 1000;
+      const during = probe.longTasks.filter((t) => t.start + t.duration >= probe.clickAt && t.start <= probe.doneAt + SETTLE_MS);
+      const over = during.filter((t) => t.duration > LONG_TASK_MS);
+      const longest = Math.max(0, ...during.map((t) => t.duration));
+      const target = TIME_TARGET[N];
+      const verdict = [
+        target === undefined ? '' : seconds <= target ? `time <= ${target} s ok` : `time > ${target} s MISSED`,
+        over.length === 0 ? 'no long task ok' : 'long tasks MISSED',
+        errors.length > 0 ? `page errors: ${errors.join('; ')}` : '',
+      ]
+        .filter(Boolean)
+        .join(', ');
+      rows.push([N.toExponential(0), seconds.toFixed(2), target === undefined ? '' : `${target}`, String(over.length), longest.toFixed(0), verdict]);
+      process.stdout.write(`  ${rows[rows.length - 1]!.join(' | ')}\n`);
+      if (process.env.BENCH_BROWSER_VERBOSE === '1') for (const t of over) process.stdout.write(`    long task at +${(t.start - probe.clickAt).toFixed(0)} ms: ${t.duration.toFixed(0)} ms\n`);
+      await context.close();
+    }
+  } finally {
+    await browser.close();
+    await new Promise<void>((done) => server.httpServer.close(() => done()));
+  }
+
+  const header = ['N', 'seconds to estimate', 'target s', `long tasks > ${LONG_TASK_MS} ms`, 'longest task ms', 'verdict'];
+  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
+  console.log(`\nworkbench in chromium (built page, vite preview), fair-coin file picked and run, from the click on Run to the estimate shown; long tasks until ${SETTLE_MS / 1000} s after it`);
+  for (const r of [header, ...rows]) console.log(r.map((cell, i) => (cell ?? '').padEnd(widths[i]!)).join('  '));
+  console.log(`requests to other origins: ${blocked.length === 0 ? 'none' : `${blocked.length} blocked (${[...new Set(blocked)].join(', ')})`}`);
+  const missed = rows.filter((r) => r[5]!.includes('MISSED')).length;
+  console.log(missed === 0 ? 'browser bench: every target met' : `browser bench: ${missed} of ${rows.length} sizes missed a target`);
+}
+
+if (process.env.BENCH_BROWSER === '0') console.log('\nbrowser bench skipped (BENCH_BROWSER=0)');
+else await main();
