@@ -106,11 +106,14 @@ export interface ReadoutRow {
   readonly value: string;
 }
 
-/** What the hover (or keyboard) read-out shows at one block length. */
+/** What the hover (or keyboard) read-out shows at one stop along x: a block length by default. */
 export interface ReadoutStop {
+  /** Block length; for a figure whose x is not n, the stop's index (and `heading` names the x value). */
   readonly n: number;
-  /** Pixel x of this n. */
+  /** Pixel x of this stop. */
   readonly x: number;
+  /** The x value in words, for figures whose x is not the block length. */
+  readonly heading?: ReadoutRow;
   readonly rows: readonly ReadoutRow[];
 }
 

@@ -16,6 +16,7 @@ import { linearAxis, round2 } from './linearAxis';
 import { BAND_OPACITY } from './palette';
 import { pathColumn } from './pathColumn';
 import { plotArea } from './plotArea';
+import { readoutNumber } from './readoutFormat';
 import { rateNats } from './rateNats';
 import { legendEntry } from './seriesStyle';
 
@@ -165,7 +166,15 @@ export function fluctuationQuantileFigure(statistics: FluctuationStatistics, siz
       lines: [identity],
       points: [points],
       legend,
-      readout: [],
+      readout: Array.from(q.theoretical, (t, i) => ({
+        n: i,
+        x: round2(x(t)),
+        heading: { id: 'quantile', label: 'N(0,1) quantile', value: readoutNumber(t) },
+        rows: [
+          { id: 'value', label: `Sorted value (rank ${q.rank[i] ?? 0} of ${q.size})`, value: readoutNumber(q.sample[i] ?? null) },
+          { id: 'band', label: `${levelText} band`, value: `${readoutNumber(q.lower[i] ?? null)} to ${readoutNumber(q.upper[i] ?? null)}` },
+        ],
+      })),
       notes: [],
     },
   };
@@ -217,7 +226,15 @@ export function fluctuationHistogramFigure(statistics: FluctuationStatistics, si
       lines: [outline, curve],
       points: [],
       legend: [legendEntry('bars', barLabel, 'band', FLUCTUATION_STYLES.bars), legendEntry(curve.id, curve.label, 'line', curve.style)],
-      readout: [],
+      readout: Array.from(hist.counts, (c, k) => ({
+        n: k,
+        x: round2(x(((hist.edges[k] ?? 0) + (hist.edges[k + 1] ?? 0)) / 2)),
+        heading: { id: 'bin', label: 'Bin', value: `${readoutNumber(hist.edges[k] ?? null)} to ${readoutNumber(hist.edges[k + 1] ?? null)}` },
+        rows: [
+          { id: 'count', label: 'Count', value: String(c) },
+          { id: 'expected', label: 'Expected under N(0,1)', value: readoutNumber(hist.expected[k] ?? null) },
+        ],
+      })),
       notes: [],
     },
   };

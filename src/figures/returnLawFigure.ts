@@ -2,11 +2,12 @@ import { returnLaw, type AnalysisResult, type ReturnLaw } from '../core';
 import { bandPath, type BandPoint, type CurvePoint } from './curvePath';
 import type { BandMark, Figure, FigureSize, LegendEntry, SeriesStyle } from './figureModel';
 import { lineMark } from './lineMark';
-import { linearAxis } from './linearAxis';
+import { linearAxis, round2 } from './linearAxis';
 import { logAxis } from './logAxis';
 import { BAND_OPACITY } from './palette';
 import { pathColumn } from './pathColumn';
 import { plotArea } from './plotArea';
+import { readoutNumber } from './readoutFormat';
 import { legendEntry } from './seriesStyle';
 
 /** Two-sided 95% normal quantile for the pointwise Greenwood band (common practice, no source). */
@@ -122,7 +123,16 @@ export function returnLawFigure(statistics: ReturnLawStatistics, size: FigureSiz
       lines: [exp, km],
       points: [],
       legend,
-      readout: [],
+      readout: Array.from(law.s, (sv, g) => ({
+        n: g,
+        x: round2(x(sv)),
+        heading: { id: 's', label: 's', value: readoutNumber(sv) },
+        rows: [
+          { id: 'survival', label: 'Kaplan-Meier P(t > s)', value: readoutNumber(law.survival[g] ?? null) },
+          { id: 'se', label: 'Standard error (Greenwood)', value: readoutNumber(law.standardError[g] ?? null) },
+          { id: 'exponential', label: 'e^(−s)', value: readoutNumber(Math.exp(-sv)) },
+        ],
+      })),
       notes: statistics.notes,
     },
   };

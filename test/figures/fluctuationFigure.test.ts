@@ -91,7 +91,12 @@ describe('fluctuation figures', () => {
     expect(mid?.x).toBeCloseTo(left + (width * (0 - d0)) / (d1 - d0), 1);
     expect(mid?.y).toBeCloseTo(top + height - (height * (0 - d0)) / (d1 - d0), 1);
     expect(m.legend.map((e) => e.kind)).toEqual(['points', 'band', 'line']);
-    expect(m.readout).toEqual([]);
+    // One read-out stop per drawn point, at its pixel x, naming the N(0,1) quantile and the sorted value.
+    expect(m.readout).toHaveLength(3);
+    expect(m.readout[1]?.x).toBe(mid?.x);
+    expect(m.readout[1]?.heading).toEqual({ id: 'quantile', label: 'N(0,1) quantile', value: '0' });
+    expect(m.readout[0]?.heading?.value).toBe('−0.8694');
+    expect(m.readout[1]?.rows[0]?.value).toBe('0');
     expect(f).toMatchSnapshot();
   });
 
@@ -106,6 +111,9 @@ describe('fluctuation figures', () => {
     const [y0, y1] = m.y.domain;
     const top = Math.min(...(m.lines[1]?.path.match(/,-?[\d.]+/g) ?? []).map((c) => Number(c.slice(1))));
     expect(top).toBeCloseTo(m.plot.top + m.plot.height * (1 - (1.65967 - y0) / (y1 - y0)), 0);
+    // One read-out stop per bin, with the bar's count: [2, 1] as worked out above.
+    expect(m.readout.map((r) => r.rows[0]?.value)).toEqual(['2', '1']);
+    expect(m.readout[0]?.heading?.label).toBe('Bin');
     expect(f).toMatchSnapshot();
   });
 

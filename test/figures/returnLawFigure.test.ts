@@ -74,6 +74,10 @@ describe('returnLawFigure', () => {
     expect(m.lines.map((l) => l.id)).toEqual(['exponential', 'survival']);
     expect(m.legend.map((e) => e.label)).toEqual(['Kaplan-Meier P(t > s), 4 samples (1 censored)', 'Pointwise 95% band (Greenwood)', 'Exp(1): e^(−s)']);
     expect(m.bands[0]?.path).not.toBe('');
+    // Read-out stops on the grid: at s = 1.5 (after t = 1, before t = 2) Kaplan-Meier gives 3/4, and
+    // e^-1.5 = 0.2231 (Abramowitz & Stegun 4.2, from memory).
+    const at = m.readout.find((r) => r.heading?.value === '1.500');
+    expect(at?.rows.map((r) => r.value)).toEqual(['0.7500', '0.2165', '0.2231']);
     expect(f).toMatchSnapshot();
   });
 });

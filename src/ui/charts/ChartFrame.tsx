@@ -158,13 +158,20 @@ export function ChartFrame({ model, testId }: { readonly model: FigureModel; rea
       {hasReadout && (
         <div id={`${id}-readout`} className="chart-readout" aria-live="polite" data-testid="chart-readout">
           {stop === undefined ? (
-            <span className="muted">Point at the plot, or focus it and use the arrow keys, to read the values at a block length.</span>
+            <span className="muted">{model.readout[0]?.heading === undefined ? 'Point at the plot, or focus it and use the arrow keys, to read the values at a block length.' : 'Point at the plot, or focus it and use the arrow keys, to read the values under the pointer.'}</span>
           ) : (
             <dl>
-              <div>
-                <dt>n</dt>
-                <dd data-testid="readout-n">{stop.n}</dd>
-              </div>
+              {stop.heading === undefined ? (
+                <div>
+                  <dt>n</dt>
+                  <dd data-testid="readout-n">{stop.n}</dd>
+                </div>
+              ) : (
+                <div>
+                  <dt>{stop.heading.label}</dt>
+                  <dd data-testid="readout-x">{stop.heading.value}</dd>
+                </div>
+              )}
               {stop.rows.map((r) => (
                 <div key={r.id}>
                   <dt>{r.label}</dt>

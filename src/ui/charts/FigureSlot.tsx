@@ -1,7 +1,8 @@
-import { useDeferredValue, useMemo, type ReactNode } from 'react';
+import { useMemo, type ReactNode } from 'react';
 import type { Figure, FigureSize } from '../../figures';
 import { ChartFrame } from './ChartFrame';
 import { figureHeight, useElementWidth } from './useElementWidth';
+import { useStaggeredValue } from './useStaggeredValue';
 
 /** Measures the available width, asks `build` for the figure at that size, and draws it or its reason for being absent. */
 export function FigureSlot({ build, testId }: { readonly build: (size: FigureSize) => Figure; readonly testId: string }): ReactNode {
@@ -9,10 +10,10 @@ export function FigureSlot({ build, testId }: { readonly build: (size: FigureSiz
   const w = Math.max(260, width);
   const h = figureHeight(width);
   // `build` should be stable (useCallback) so a figure is rebuilt only when its inputs or size change.
-  // Deferred: a new result first shows its numbers, then the figures are built and drawn in a
-  // render React can interrupt; building and drawing every figure in the store update's own
-  // synchronous render held the main thread about 200 ms at the end of a run (`npm run bench`).
-  const deferredBuild = useDeferredValue(build);
+  // Staggered: a new result first shows its numbers, then the figures are built and drawn one per
+  // task; building and drawing every figure in the store update's own render held the main thread
+  // about 200 ms at the end of a run (`npm run bench`, browser part).
+  const deferredBuild = useStaggeredValue(build);
   const figure = useMemo(() => deferredBuild({ width: w, height: h }), [deferredBuild, w, h]);
   return (
     <div ref={ref} className="figure-slot">
