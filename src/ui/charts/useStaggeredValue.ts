@@ -22,7 +22,8 @@ function pump(): void {
  * once, later ones one component per task, in the order they changed, each committed on its own.
  */
 export function useStaggeredValue<T>(value: T): T {
-  const [shown, setShown] = useState(value);
+  // Wrapped, so a function value is kept rather than called as an initializer.
+  const [shown, setShown] = useState(() => value);
   useEffect(() => {
     if (Object.is(shown, value)) return;
     let live = true;
