@@ -1,16 +1,25 @@
 import { useLayoutEffect, useRef, useState } from 'react';
 
-/** The content width of an element, kept current with a ResizeObserver (figures redraw to fit). */
+/**
+ * The content width of an element, kept current with a ResizeObserver (figures redraw to fit). The
+ * observer reports the first width itself, after the browser's own layout; reading clientWidth here
+ * would force a layout of the whole page inside the commit that mounts the figure, once per figure
+ * (about 25 ms at the end of a run, `npm run bench`, browser part).
+ */
 export function useElementWidth<T extends HTMLElement>(fallback = 720) {
   const ref = useRef<T>(null);
   const [width, setWidth] = useState(fallback);
   useLayoutEffect(() => {
     const element = ref.current;
     if (element === null) return;
-    const measure = () => setWidth(Math.round(element.clientWidth) || fallback);
-    measure();
-    if (typeof ResizeObserver === 'undefined') return;
-    const observer = new ResizeObserver(measure);
+    if (typeof ResizeObserver === 'undefined') {
+      setWidth(Math.round(element.clientWidth) || fallback);
+      return;
+    }
+    const observer = new ResizeObserver((entries) => {
+      const box = entries[entries.length - 1]?.contentRect;
+      if (box !== undefined) setWidth(Math.round(box.width) || fallback);
+    });
     observer.observe(element);
     return () => observer.disconnect();
   }, [fallback]);

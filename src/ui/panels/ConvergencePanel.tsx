@@ -1,6 +1,7 @@
 import { useCallback, useMemo } from 'react';
 import { convergenceDataOfResult, convergenceFigureOfRows, partialConvergenceData, type ConvergenceData, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useStaggeredValue } from '../charts/useStaggeredValue';
 import { updateView, useAppState } from '../store/store';
 import { partialLabel } from '../view/partialLabel';
 
@@ -26,7 +27,8 @@ function ConvergenceFigure({ data, label }: { readonly data: ConvergenceData; re
 /** log R_n / n against n, with the mean, quantile bands and the block-entropy references; it fills in
  * level by level while a run goes, and the run's result replaces it. */
 export function ConvergencePanel() {
-  const result = useAppState((s) => s.result);
+  // Each figure panel takes a new result in its own task (useStaggeredValue).
+  const result = useStaggeredValue(useAppState((s) => s.result));
   const partial = useAppState((s) => s.partial);
   const data = useMemo(() => {
     if (partial !== null) return partialConvergenceData(partial.rows, partial.unit, partial.maxN);

@@ -2,6 +2,7 @@ import { useCallback, useMemo, useState } from 'react';
 import type { AnalysisResult } from '../../core';
 import { envelopeFigure, envelopeStatistics, readoutPercent, type EnvelopeField, type EnvelopeOptions, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useStaggeredValue } from '../charts/useStaggeredValue';
 import { resetView, updateView, useAppState } from '../store/store';
 import { parseEnvelopeField } from '../view/envelopeInput';
 
@@ -113,7 +114,8 @@ function EnvelopeView({ result }: { readonly result: AnalysisResult }) {
 
 /** Deviations log R_n(x) − n ĥ with Gaussian, iterated-logarithm and error-term bands, and the share of paths outside each. */
 export function EnvelopePanel() {
-  const result = useAppState((s) => s.result);
+  // Each figure panel takes a new result in its own task (useStaggeredValue).
+  const result = useStaggeredValue(useAppState((s) => s.result));
   return (
     <section className="panel" aria-labelledby="envelope-heading">
       <h2 id="envelope-heading">Envelopes of log R_n − n ĥ</h2>

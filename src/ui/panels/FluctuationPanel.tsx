@@ -13,6 +13,7 @@ import {
   type FluctuationStatistics,
 } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useStaggeredValue } from '../charts/useStaggeredValue';
 import { updateView, useAppState } from '../store/store';
 import { parseGap } from '../view/gapInput';
 import { LengthSlider } from './LengthSlider';
@@ -132,7 +133,8 @@ function FluctuationView({ result }: { readonly result: AnalysisResult }) {
 
 /** Normalized fluctuations of log R_n at one n against N(0,1): Q-Q plot, histogram and two goodness-of-fit tests. */
 export function FluctuationPanel() {
-  const result = useAppState((s) => s.result);
+  // Each figure panel takes a new result in its own task (useStaggeredValue).
+  const result = useStaggeredValue(useAppState((s) => s.result));
   return (
     <section className="panel" aria-labelledby="fluctuation-heading">
       <h2 id="fluctuation-heading">Fluctuations against the Gaussian</h2>

@@ -3,6 +3,7 @@ import { useCallback, useMemo } from 'react';
 import type { AnalysisResult } from '../../core';
 import { clampViewLength, readoutNumber, returnLawFigure, returnLawStatistics, viewLengthRange, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useStaggeredValue } from '../charts/useStaggeredValue';
 import { updateView, useAppState } from '../store/store';
 import { LengthSlider } from './LengthSlider';
 
@@ -62,7 +63,8 @@ function ReturnLawView({ result }: { readonly result: AnalysisResult }) {
 
 /** Kaplan-Meier survival of R_n times the block frequency against the Exp(1) law, at one chosen n. */
 export function ReturnLawPanel() {
-  const result = useAppState((s) => s.result);
+  // Each figure panel takes a new result in its own task (useStaggeredValue).
+  const result = useStaggeredValue(useAppState((s) => s.result));
   return (
     <section className="panel" aria-labelledby="return-law-heading">
       <h2 id="return-law-heading">Return law at one block length</h2>

@@ -2,6 +2,7 @@ import { useCallback } from 'react';
 import type { AnalysisResult } from '../../core';
 import { varianceGrowthFigure, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useStaggeredValue } from '../charts/useStaggeredValue';
 import { useAppState } from '../store/store';
 
 function VarianceGrowthFigure({ result }: { readonly result: AnalysisResult }) {
@@ -11,7 +12,8 @@ function VarianceGrowthFigure({ result }: { readonly result: AnalysisResult }) {
 
 /** Var(log R_n) against n and the fitted line whose slope is the variance-growth estimate of sigma^2. */
 export function VarianceGrowthPanel() {
-  const result = useAppState((s) => s.result);
+  // Each figure panel takes a new result in its own task (useStaggeredValue).
+  const result = useStaggeredValue(useAppState((s) => s.result));
   return (
     <section className="panel" aria-labelledby="variance-heading">
       <h2 id="variance-heading">Growth of Var(log R_n)</h2>
