@@ -32,9 +32,10 @@ test('the three figures show marks, labelled axes with units, a legend and a key
 
   const convergence = page.getByTestId('convergence-figure');
   await expectFigure(convergence, /^log R_n \/ n \((nat|bit)\/symbol\)$/);
-  // The sampled paths are drawn, to SVG or (past a few thousand segments) to a canvas.
-  const drawnPaths = (await convergence.getByTestId('paths-canvas').count()) + (await convergence.locator('[data-mark="paths"] path').count());
-  expect(drawnPaths).toBeGreaterThan(0);
+  // The sampled paths are drawn, to SVG or (past a few thousand segments) to a canvas; the figures
+  // take the result a task after the summary, so poll.
+  const drawnPaths = async () => (await convergence.getByTestId('paths-canvas').count()) + (await convergence.locator('[data-mark="paths"] path').count());
+  await expect.poll(drawnPaths).toBeGreaterThan(0);
   await expect(convergence.locator('[data-mark="line"]')).not.toHaveCount(0);
   await expect(convergence.getByRole('list', { name: /^Legend/ })).toContainText('Exact h');
   await expectKeyboardReadout(convergence);

@@ -40,3 +40,4 @@ export function useStaggeredValue<T>(value: T): T {
   }, [value, shown]);
   return shown;
 }
+

@@ -1,7 +1,7 @@
 import { useCallback, useMemo } from 'react';
 import { convergenceDataOfResult, convergenceFigureOfRows, partialConvergenceData, type ConvergenceData, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
-import { useStaggeredValue } from '../charts/useStaggeredValue';
+import { useStaggeredRun } from './useStaggeredRun';
 import { updateView, useAppState } from '../store/store';
 import { partialLabel } from '../view/partialLabel';
 
@@ -27,9 +27,7 @@ function ConvergenceFigure({ data, label }: { readonly data: ConvergenceData; re
 /** log R_n / n against n, with the mean, quantile bands and the block-entropy references; it fills in
  * level by level while a run goes, and the run's result replaces it. */
 export function ConvergencePanel() {
-  // Each figure panel takes a new result in its own task (useStaggeredValue).
-  const result = useStaggeredValue(useAppState((s) => s.result));
-  const partial = useAppState((s) => s.partial);
+  const { result, partial } = useStaggeredRun();
   const data = useMemo(() => {
     if (partial !== null) return partialConvergenceData(partial.rows, partial.unit, partial.maxN);
     return result === null ? null : convergenceDataOfResult(result);

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
-import { useAppState } from '../store/store';
 import { lengthRowsView, lengthTableView, type LengthTableView } from '../view/lengthTableView';
 import { partialLabel } from '../view/partialLabel';
+import { useStaggeredRun } from './useStaggeredRun';
 
 function LengthTable({ view, partial }: { readonly view: LengthTableView; readonly partial: string | null }) {
   return (
@@ -61,8 +61,8 @@ function LengthTable({ view, partial }: { readonly view: LengthTableView; readon
 
 /** The compact per-n table: the running run's rows as they arrive (or a cancelled run's), else the last result's. */
 export function LengthTablePanel() {
-  const result = useAppState((s) => s.result);
-  const partial = useAppState((s) => s.partial);
+  // Its own task when the run ends (the table is rebuilt from the final rows), like the figures.
+  const { result, partial } = useStaggeredRun();
   const view = useMemo(() => {
     if (partial !== null) return lengthRowsView(partial.rows, null, partial.unit);
     return result === null ? null : lengthTableView(result);
