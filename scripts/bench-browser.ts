@@ -8,20 +8,16 @@
 // the whole part (`npm run bench` runs it after the command-line bench). Requests to any other
 // origin are blocked and listed. The worker's memory is not measured: the page is not
 // cross-origin isolated, so performance.measureUserAgentSpecificMemory is unavailable.
-import { existsSync, mkdirSync, statSync, writeFileSync } from 'node:fs';
+import { writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
-import { tmpdir } from 'node:os';
-import { basename, dirname, join, resolve } from 'node:path';
+import { basename, dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium } from '@playwright/test';
 import { build, preview } from 'vite';
-import { parseSourceSpec } from '../src/core/sources/catalog';
-import { writeSequence } from '../src/cli/writeSequence';
+import { benchFile } from './benchFiles';
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const sizes = (process.env.BENCH_BROWSER_SIZES ?? '1e6,1e7').split(',').map(Number);
-const dir = process.env.BENCH_DIR ?? join(tmpdir(), 'returnrate-bench');
-mkdirSync(dir, { recursive: true });
 const SPEC = 'coin';
 
 // Targets of the workbench issue: seconds from pressing Run to the estimate; main-thread tasks.
@@ -57,14 +53,6 @@ function heaviest(profile: Profile, count: number): string[] {
     .sort((a, b) => b[1] - a[1])
     .slice(0, count)
     .map(([k, ms]) => `${ms.toFixed(0).padStart(6)} ms  ${k}`);
-}
-
-async function ensureFile(spec: string, N: number): Promise<string> {
-  const path = join(dir, `${spec.replace(/[^a-z0-9]+/gi, '_')}-${N}.txt`);
-  if (existsSync(path) && statSync(path).size >= N) return path;
-  process.stdout.write(`  generating ${N} symbols of ${spec} ...\n`);
-  await writeSequence(parseSourceSpec(spec).generate(N, 2026), path);
-  return path;
 }
 
 function freePort(): Promise<number> {
@@ -116,7 +104,7 @@ interface LongTask {
 }
 
 async function main(): Promise<void> {
-  const files = await Promise.all(sizes.map((N) => ensureFile(SPEC, N)));
+  const files = await Promise.all(sizes.map((N) => benchFile(SPEC, N)));
 
   process.stdout.write('  building the page (vite build) ...\n');
   // Profiling wants readable function names: the profiled build is not minified.

@@ -3,11 +3,7 @@
 // to 1e6, 1e7, 1e8; BENCH_SIZES=1e6,1e7 limits them. Generated files are cached in BENCH_DIR
 // (default: the system's temporary folder).
 import { spawnSync } from 'node:child_process';
-import { existsSync, mkdirSync, statSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { parseSourceSpec } from '../src/core/sources/catalog';
-import { writeSequence } from '../src/cli/writeSequence';
+import { benchFile } from './benchFiles';
 
 interface Case {
   label: string;
@@ -22,20 +18,10 @@ const CASES: Case[] = [
 ];
 const sizes = (process.env.BENCH_SIZES ?? '1e6,1e7,1e8').split(',').map(Number);
 const maxN = 40;
-const dir = process.env.BENCH_DIR ?? join(tmpdir(), 'returnrate-bench');
-mkdirSync(dir, { recursive: true });
 
 // Targets on a 2-core machine, one thread, end to end.
 const TIME_TARGET: Record<number, number> = { 1e7: 6, 1e8: 90 };
 const MEMORY_TARGET_BYTES_PER_SYMBOL = 16;
-
-async function ensureFile(spec: string, N: number): Promise<string> {
-  const path = join(dir, `${spec.replace(/[^a-z0-9]+/gi, '_')}-${N}.txt`);
-  if (existsSync(path) && statSync(path).size >= N) return path;
-  process.stdout.write(`  generating ${N} symbols of ${spec} ...\n`);
-  await writeSequence(parseSourceSpec(spec).generate(N, 2026), path);
-  return path;
-}
 
 interface Timing {
   symbols: number;
@@ -48,7 +34,7 @@ interface Timing {
 const rows: string[][] = [];
 for (const c of CASES) {
   for (const N of sizes) {
-    const file = await ensureFile(c.spec, N);
+    const file = await benchFile(c.spec, N);
     const t0 = performance.now();
     const run = spawnSync(process.execPath, ['bin/returnrate.mjs', 'analyze', file, '--format', 'chars', '--max-n', String(maxN), '--quiet', '--timing'], {
       encoding: 'utf8',
