@@ -1,5 +1,6 @@
 import { entropyFromNats, type AnalysisResult, type EntropyUnit, type LengthRow } from '../core';
 import { bandPath, type BandPoint, type CurvePoint } from './curvePath';
+import { bandRows } from './dataRows';
 import { lineMark } from './lineMark';
 import type { Figure, FigureSize, LegendEntry, LineMark, ReadoutStop } from './figureModel';
 import { linearAxis, round2 } from './linearAxis';
@@ -115,8 +116,8 @@ export function convergenceFigureOfRows(data: ConvergenceData, size: FigureSize,
   if (estimate !== null) lines.push(lineMark('estimate', `Estimate ĥ = ${readoutNumber(estimate)}`, STYLES.estimate, flat(estimate), x, y));
   if (exact !== null) lines.push(lineMark('exact', `Exact h = ${readoutNumber(exact)}`, STYLES.exact, flat(exact), x, y));
   const bands = [
-    { id: 'band-outer', label: '5–95% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(outer, x, y) },
-    { id: 'band-inner', label: '25–75% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY * 1.8, path: bandPath(inner, x, y) },
+    { id: 'band-outer', label: '5–95% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(outer, x, y), data: bandRows(outer) },
+    { id: 'band-inner', label: '25–75% of log R_n / n', colour: 'cobalt' as const, opacity: BAND_OPACITY * 1.8, path: bandPath(inner, x, y), data: bandRows(inner) },
   ];
   const layer = pathLayer(curves, x, y, STYLES.samplePath, `Sampled positions (${curves.length})`);
   const spans = trustedSpan(data, x);

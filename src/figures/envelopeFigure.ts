@@ -1,5 +1,6 @@
 import { entropyFromNats, type AnalysisResult } from '../core';
 import { bandPath, curvePath, type BandPoint, type CurvePoint } from './curvePath';
+import { bandRows } from './dataRows';
 import { lineMark } from './lineMark';
 import { envelopeExceedance, type BandWidths, type ExceedanceRow } from './envelopeExceedance';
 import { errorTermHalfWidth, gaussianHalfWidth, iteratedLogHalfWidth, type EnvelopeOptions } from './envelopeBands';
@@ -100,12 +101,12 @@ export function envelopeFigure(
   const lines: LineMark[] = [lineMark('zero', 'Zero', STYLES.zero, flat(0, shownN), x, y)];
   const bands = [];
   if (sigmaNats !== null) {
-    bands.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(gaussian, x, y) });
-    lines.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, style: STYLES.gaussianBand, path: edges(gaussian), vertices: [] });
-    lines.push({ id: 'iteratedLog', label: '±σ̂ √(2 n log log n)', style: STYLES.lilEnvelope, path: edges(lil), vertices: [] });
+    bands.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, colour: 'cobalt' as const, opacity: BAND_OPACITY, path: bandPath(gaussian, x, y), data: bandRows(gaussian) });
+    lines.push({ id: 'gaussian', label: `±${zText} σ̂ √n`, style: STYLES.gaussianBand, path: edges(gaussian), vertices: [], data: bandRows(gaussian) });
+    lines.push({ id: 'iteratedLog', label: '±σ̂ √(2 n log log n)', style: STYLES.lilEnvelope, path: edges(lil), vertices: [], data: bandRows(lil) });
   }
   const errorLabel = `±${parameterText(options.errorC)} n^(1/2 − ${parameterText(options.delta)})`;
-  lines.push({ id: 'errorTerm', label: errorLabel, style: STYLES.errorTerm, path: edges(error), vertices: [] });
+  lines.push({ id: 'errorTerm', label: errorLabel, style: STYLES.errorTerm, path: edges(error), vertices: [], data: bandRows(error) });
   const layer = pathLayer(curves, x, y, STYLES.samplePath, `Sampled positions (${curves.length})`);
   const spans = trustedSpan(result, x);
 

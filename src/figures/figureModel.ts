@@ -42,6 +42,19 @@ export interface AxisModel {
   readonly ticks: readonly AxisTick[];
 }
 
+/**
+ * One plotted value in data units (not pixels), kept beside the marks so a figure's numbers can be
+ * written out (CSV) exactly as drawn. A line or point has y; a band has lower and upper; a
+ * histogram bar has y (the count) over x..x2.
+ */
+export interface DataRow {
+  readonly x: number;
+  readonly x2: number | null;
+  readonly y: number | null;
+  readonly lower: number | null;
+  readonly upper: number | null;
+}
+
 /** A polyline (with gaps) as SVG path data; a canvas can draw the same string through Path2D. */
 export interface LineMark {
   readonly id: string;
@@ -50,6 +63,8 @@ export interface LineMark {
   readonly path: string;
   /** Pixel positions of the data points, where the style puts a marker on them (empty otherwise). */
   readonly vertices: readonly { readonly x: number; readonly y: number }[];
+  /** The drawn points in data units (gaps left out). */
+  readonly data: readonly DataRow[];
 }
 
 /** A filled band between a lower and an upper curve, as one closed SVG path per contiguous stretch. */
@@ -59,6 +74,8 @@ export interface BandMark {
   readonly colour: PaletteName;
   readonly opacity: number;
   readonly path: string;
+  /** The drawn stretch in data units (undefined ends left out). */
+  readonly data: readonly DataRow[];
 }
 
 export interface PointMark {
@@ -66,6 +83,8 @@ export interface PointMark {
   readonly label: string;
   readonly style: SeriesStyle;
   readonly points: readonly { readonly x: number; readonly y: number }[];
+  /** The same points in data units, in the same order. */
+  readonly data: readonly DataRow[];
 }
 
 /** A shaded stretch of the x axis (e.g. the trusted range), pixel bounds. */
@@ -83,6 +102,8 @@ export interface PathLayer {
   readonly style: SeriesStyle;
   /** One SVG path string per sampled path. */
   readonly paths: readonly string[];
+  /** Each path's drawn points in data units, in the order of `paths`. */
+  readonly data: readonly (readonly DataRow[])[];
   /** Line segments in all paths together. */
   readonly segments: number;
   readonly render: 'svg' | 'canvas';

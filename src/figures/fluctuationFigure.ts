@@ -9,8 +9,9 @@ import {
   type NormalizedFluctuations,
   type NormalQuantilePlot,
 } from '../core';
-import { bandPath, curvePath, type CurvePoint } from './curvePath';
-import type { BandMark, Figure, FigureSize, LegendEntry, LineMark, PointMark, SeriesStyle } from './figureModel';
+import { bandPath, curvePath, type BandPoint, type CurvePoint } from './curvePath';
+import type { BandMark, DataRow, Figure, FigureSize, LegendEntry, LineMark, PointMark, SeriesStyle } from './figureModel';
+import { bandRows, curveRows } from './dataRows';
 import { lineMark } from './lineMark';
 import { linearAxis, round2 } from './linearAxis';
 import { BAND_OPACITY } from './palette';
@@ -117,16 +118,14 @@ export function fluctuationQuantileFigure(statistics: FluctuationStatistics, siz
   // Both axes on x's rounded domain, so the identity line runs corner to corner.
   const { scale: y, axis: yAxis } = linearAxis(x.domain() as [number, number], [plot.top + plot.height, plot.top], { label: FLUCTUATION_LABEL, unit: '' }, false);
   const levelText = `${Math.round(q.level * 100)}%`;
+  const bandPoints: BandPoint[] = Array.from(q.theoretical, (t, i) => ({ x: t, lower: q.lower[i] ?? null, upper: q.upper[i] ?? null }));
   const band: BandMark = {
     id: 'band',
     label: `Pointwise ${levelText} band for N(0,1)`,
     colour: FLUCTUATION_STYLES.pointwiseBand.colour,
     opacity: BAND_OPACITY * 1.5,
-    path: bandPath(
-      Array.from(q.theoretical, (t, i) => ({ x: t, lower: q.lower[i] ?? null, upper: q.upper[i] ?? null })),
-      x,
-      y,
-    ),
+    path: bandPath(bandPoints, x, y),
+    data: bandRows(bandPoints),
   };
   const [d0, d1] = x.domain() as [number, number];
   const identity = lineMark(
@@ -145,6 +144,7 @@ export function fluctuationQuantileFigure(statistics: FluctuationStatistics, siz
     label: q.rank.length < q.size ? `Sorted values (${q.rank.length} of ${q.size} drawn)` : `Sorted values (${q.size})`,
     style: FLUCTUATION_STYLES.quantilePoints,
     points: Array.from(q.theoretical, (t, i) => ({ x: round2(x(t)), y: round2(y(q.sample[i] ?? 0)) })),
+    data: Array.from(q.theoretical, (t, i) => ({ x: t, x2: null, y: q.sample[i] ?? 0, lower: null, upper: null })),
   };
   const legend: LegendEntry[] = [
     legendEntry(points.id, points.label, 'points', points.style),
@@ -194,6 +194,16 @@ export function barsPath(edges: ArrayLike<number>, counts: ArrayLike<number>, x:
   return d;
 }
 
+/** The bins barsPath draws (count above zero) in data units: x..x2 is the bin, y its count. */
+function barRows(edges: ArrayLike<number>, counts: ArrayLike<number>): DataRow[] {
+  const out: DataRow[] = [];
+  for (let k = 0; k < counts.length; k++) {
+    const c = counts[k] ?? 0;
+    if (c > 0) out.push({ x: edges[k] ?? 0, x2: edges[k + 1] ?? 0, y: c, lower: null, upper: null });
+  }
+  return out;
+}
+
 /** Histogram of the fluctuations (Freedman-Diaconis bins) with the N(0,1) density on the count scale. */
 export function fluctuationHistogramFigure(statistics: FluctuationStatistics, size: FigureSize): Figure {
   const hist = statistics.histogram;
@@ -207,10 +217,10 @@ export function fluctuationHistogramFigure(statistics: FluctuationStatistics, si
   const { scale: y, axis: yAxis } = linearAxis([0, yHi], [plot.top + plot.height, plot.top], { label: 'Count', unit: '' });
   const path = barsPath(hist.edges, hist.counts, x, y);
   const barLabel = `Counts in bins of width ${round2(hist.binWidth)} (${hist.size} values)`;
-  const bars: BandMark = { id: 'bars', label: barLabel, colour: FLUCTUATION_STYLES.bars.colour, opacity: BAND_OPACITY * 2, path };
-  const outline: LineMark = { id: 'bars', label: barLabel, style: FLUCTUATION_STYLES.bars, path, vertices: [] };
+  const bars: BandMark = { id: 'bars', label: barLabel, colour: FLUCTUATION_STYLES.bars.colour, opacity: BAND_OPACITY * 2, path, data: barRows(hist.edges, hist.counts) };
+  const outline: LineMark = { id: 'bars', label: barLabel, style: FLUCTUATION_STYLES.bars, path, vertices: [], data: barRows(hist.edges, hist.counts) };
   const curvePoints: CurvePoint[] = Array.from(hist.curveX, (v, i) => ({ x: v, y: hist.curveY[i] ?? null }));
-  const curve: LineMark = { id: 'gaussian', label: 'N(0,1) on the count scale', style: FLUCTUATION_STYLES.gaussianCurve, path: curvePath(curvePoints, x, y), vertices: [] };
+  const curve: LineMark = { id: 'gaussian', label: 'N(0,1) on the count scale', style: FLUCTUATION_STYLES.gaussianCurve, path: curvePath(curvePoints, x, y), vertices: [], data: curveRows(curvePoints) };
   return {
     kind: 'figure',
     model: {

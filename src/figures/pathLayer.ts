@@ -1,6 +1,7 @@
 import type { ScaleLinear } from 'd3-scale';
 import type { AnalysisResult } from '../core';
 import { curvePath, segmentCount, type CurvePoint } from './curvePath';
+import { curveRows } from './dataRows';
 import type { PathLayer, SeriesStyle } from './figureModel';
 
 /** Above this many line segments the sample paths go to a canvas: SVG slows down past a few thousand nodes. */
@@ -33,9 +34,10 @@ export function pathLayer(
   if (curves.length === 0) return null;
   let segments = 0;
   const paths: string[] = [];
+  const data = curves.map(curveRows);
   for (const c of curves) {
     segments += segmentCount(c);
     paths.push(curvePath(c, x, y));
   }
-  return { id: 'paths', label, style, paths, segments, render: segments > canvasLimit ? 'canvas' : 'svg' };
+  return { id: 'paths', label, style, paths, data, segments, render: segments > canvasLimit ? 'canvas' : 'svg' };
 }

@@ -1,6 +1,7 @@
 import { returnLaw, type AnalysisResult, type ReturnLaw } from '../core';
 import { bandPath, type BandPoint, type CurvePoint } from './curvePath';
 import type { BandMark, Figure, FigureSize, LegendEntry, SeriesStyle } from './figureModel';
+import { bandRows } from './dataRows';
 import { lineMark } from './lineMark';
 import { linearAxis, round2 } from './linearAxis';
 import { logAxis } from './logAxis';
@@ -100,6 +101,7 @@ export function returnLawFigure(statistics: ReturnLawStatistics, size: FigureSiz
     colour: RETURN_LAW_STYLES.survival.colour,
     opacity: BAND_OPACITY,
     path: bandPath(band, x, y),
+    data: bandRows(band),
   };
   const km = lineMark('survival', `Kaplan-Meier P(t > s), ${law.size} samples (${law.censored} censored)`, RETURN_LAW_STYLES.survival, survival, x, y);
   const exp = lineMark('exponential', 'Exp(1): e^(−s)', RETURN_LAW_STYLES.exponential, exponential, x, y);

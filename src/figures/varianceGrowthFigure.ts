@@ -111,6 +111,10 @@ export function varianceGrowthFigure(result: AnalysisResult, size: FigureSize): 
         const v = variances[i];
         return v === null || v === undefined ? [] : [{ x: round2(x(r.n)), y: round2(y(v)) }];
       }),
+      data: rows.flatMap((r, i) => {
+        const v = variances[i];
+        return v === null || v === undefined ? [] : [{ x: r.n, x2: null, y: v, lower: null, upper: null }];
+      }),
     },
   ];
   const spans = trustedSpan(result, x);
