@@ -8,6 +8,7 @@ import { readInputFile } from './readInput';
 import type { CliIo } from './runCli';
 import { summaryText } from './summaryText';
 import { UsageError } from './usageError';
+import { writeFigures } from './writeFigures';
 
 type Values = Record<string, string | boolean | undefined>;
 
@@ -130,6 +131,9 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   await emit(result, [result], values, io);
+  if (values.figures !== undefined) {
+    await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
+  }
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {

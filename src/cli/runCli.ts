@@ -17,7 +17,7 @@ export interface CliIo {
 const HELP = `returnrate ${PROGRAM_VERSION}: entropy rate of a symbol sequence from the return times of its blocks
 
 usage
-  returnrate analyze FILE [reading options] [analysis options] [--json PATH|-] [--no-table] [--quiet]
+  returnrate analyze FILE [reading options] [analysis options] [--json PATH|-] [--figures DIR] [--no-table] [--quiet]
   returnrate analyze --source SPEC --length L [--seed S] [analysis options]
   returnrate returns FILE --n N [reading options] [--out PATH]
   returnrate generate SOURCE --length L [--seed S] [--out PATH]
@@ -40,6 +40,9 @@ analysis options
       --max-censored F       largest censored fraction inside the trusted range (default 0.01)
       --progress             show the block length being processed on standard error (the default
                              when standard error is a terminal; Ctrl-C stops the run)
+      --figures DIR          write one SVG and one CSV per figure (convergence, envelopes,
+                             variance-growth, fluctuations-qq, fluctuations-histogram, return-law)
+                             into DIR, made when missing
       --timing               print timing and peak memory as one JSON line on standard error
 
 reference sources (SPEC / SOURCE)
@@ -54,6 +57,7 @@ const OPTIONS = {
   ...READ_OPTIONS,
   ...ANALYSIS_OPTIONS,
   json: { type: 'string' },
+  figures: { type: 'string' },
   'no-table': { type: 'boolean' },
   quiet: { type: 'boolean', short: 'q' },
   timing: { type: 'boolean' },

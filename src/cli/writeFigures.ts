@@ -1,0 +1,53 @@
+import { mkdir, writeFile } from 'node:fs/promises';
+import { join } from 'node:path';
+import type { AnalysisResult } from '../core';
+import { exportFigures, figureCsv, figureSvg } from '../figures';
+import { OutputError } from './outputStream';
+
+const REASONS: Readonly<Record<string, string>> = {
+  EACCES: 'permission denied',
+  EPERM: 'permission denied',
+  EEXIST: 'a file of that name is in the way',
+  ENOTDIR: 'a file of that name is in the way',
+  EROFS: 'read-only file system',
+  ENOSPC: 'no space left on the device',
+};
+
+function reason(e: unknown): string {
+  const code = (e as NodeJS.ErrnoException | null)?.code;
+  return code === undefined ? String((e as Error | null)?.message ?? e) : `${REASONS[code] ?? 'write failed'}, ${code}`;
+}
+
+/**
+ * `--figures DIR`: one SVG and one CSV per view of the result, from the same figure models the
+ * workbench draws (exportFigures, at EXPORT_SIZE with the workbench's default view options). The
+ * folder is made when missing. A view that cannot be drawn (e.g. too few fluctuations) gets no
+ * files and a note on standard error. Returns the paths written.
+ */
+export async function writeFigures(result: AnalysisResult, dir: string, note: (line: string) => void): Promise<string[]> {
+  try {
+    await mkdir(dir, { recursive: true });
+  } catch (e) {
+    throw new OutputError(`${dir}: cannot make the figures folder (${reason(e)})`, { cause: e });
+  }
+  const written: string[] = [];
+  for (const { id, figure, caption } of exportFigures(result)) {
+    if (figure.kind !== 'figure') {
+      note(`returnrate: note: figure ${id} not written: ${figure.message}`);
+      continue;
+    }
+    for (const [ext, text] of [
+      ['svg', figureSvg(figure.model, caption)],
+      ['csv', figureCsv(id, figure.model, caption)],
+    ] as const) {
+      const path = join(dir, `${id}.${ext}`);
+      try {
+        await writeFile(path, text, 'utf8');
+      } catch (e) {
+        throw new OutputError(`${path}: cannot write (${reason(e)})`, { cause: e });
+      }
+      written.push(path);
+    }
+  }
+  return written;
+}
