@@ -160,7 +160,7 @@ describe('figureCsv', () => {
     expect(mean.length).toBe(line?.vertices.length);
     // log R_n / n at n = 1 from the result's own row, in its unit (nat): meanLogReturn / 1.
     const first = result.lengths[0]!;
-    expect(Number(mean[0]?.[5])).toBe((first.meanLogReturnCorrected ?? first.meanLogReturn) / 1);
+    expect(Number(mean[0]?.[5])).toBe((first.meanLogReturnCorrected ?? first.meanLogReturn ?? NaN) / 1);
   });
 
   it('a hostile input name in the comments stays on one comment line and cannot start a record', () => {
