@@ -35,19 +35,34 @@ export interface ExportedFigure {
   readonly caption: FigureCaption;
 }
 
+/** The caption of one exported view: the result's source and settings plus the view options that shape it. */
+export function exportCaption(id: ExportFigureId, result: AnalysisResult, view: ExportViewOptions = DEFAULT_EXPORT_VIEW): FigureCaption {
+  const gap = `, least gap ${view.fluctuationGap}`;
+  switch (id) {
+    case 'convergence':
+      return figureCaption(result, view.showPaths ? 'sampled paths shown' : 'sampled paths hidden');
+    case 'envelopes':
+      return figureCaption(result, `z ${view.z}, δ ${view.delta}, C ${view.errorC}`);
+    case 'variance-growth':
+      return figureCaption(result);
+    case 'fluctuations-qq':
+    case 'fluctuations-histogram':
+      return figureCaption(result, `n = ${clampViewLength(result, view.fluctuationN)}${gap}`);
+    case 'return-law':
+      return figureCaption(result, `n = ${clampViewLength(result, view.returnLawN)}`);
+  }
+}
+
 /** Every view of a result as figures with captions: one code path for the command line's files and tests. */
 export function exportFigures(result: AnalysisResult, view: ExportViewOptions = DEFAULT_EXPORT_VIEW, size: FigureSize = EXPORT_SIZE): ExportedFigure[] {
-  const fn = clampViewLength(result, view.fluctuationN);
-  const rn = clampViewLength(result, view.returnLawN);
-  const fluctuations = fluctuationStatistics(result, fn, view.fluctuationGap);
-  const envelope = `z ${view.z}, δ ${view.delta}, C ${view.errorC}`;
-  const at = (n: number, extra = ''): string => `n = ${n}${extra}`;
-  return [
-    { id: 'convergence', figure: convergenceFigure(result, size, { showPaths: view.showPaths }), caption: figureCaption(result, view.showPaths ? 'sampled paths shown' : 'sampled paths hidden') },
-    { id: 'envelopes', figure: envelopeFigure(result, size, view), caption: figureCaption(result, envelope) },
-    { id: 'variance-growth', figure: varianceGrowthFigure(result, size), caption: figureCaption(result) },
-    { id: 'fluctuations-qq', figure: fluctuationQuantileFigure(fluctuations, size), caption: figureCaption(result, at(fn, `, least gap ${view.fluctuationGap}`)) },
-    { id: 'fluctuations-histogram', figure: fluctuationHistogramFigure(fluctuations, size), caption: figureCaption(result, at(fn, `, least gap ${view.fluctuationGap}`)) },
-    { id: 'return-law', figure: returnLawFigure(returnLawStatistics(result, rn), size), caption: figureCaption(result, at(rn)) },
-  ];
+  const fluctuations = fluctuationStatistics(result, clampViewLength(result, view.fluctuationN), view.fluctuationGap);
+  const figures: Record<ExportFigureId, Figure> = {
+    convergence: convergenceFigure(result, size, { showPaths: view.showPaths }),
+    envelopes: envelopeFigure(result, size, view),
+    'variance-growth': varianceGrowthFigure(result, size),
+    'fluctuations-qq': fluctuationQuantileFigure(fluctuations, size),
+    'fluctuations-histogram': fluctuationHistogramFigure(fluctuations, size),
+    'return-law': returnLawFigure(returnLawStatistics(result, clampViewLength(result, view.returnLawN)), size),
+  };
+  return EXPORT_FIGURE_IDS.map((id) => ({ id, figure: figures[id], caption: exportCaption(id, result, view) }));
 }

@@ -29,5 +29,5 @@ export { figureSvg } from './figureSvg';
 export { figureCsv, figureCsvRowCount } from './figureCsv';
 export { csvField, csvRecord } from './csvField';
 export { xmlText } from './xmlText';
-export { exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, EXPORT_SIZE } from './exportFigures';
+export { exportCaption, exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, EXPORT_SIZE } from './exportFigures';
 export type { ExportFigureId, ExportedFigure, ExportViewOptions } from './exportFigures';

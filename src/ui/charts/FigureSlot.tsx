@@ -1,11 +1,21 @@
 import { useMemo, type ReactNode } from 'react';
-import type { Figure, FigureSize } from '../../figures';
+import type { ExportFigureId, Figure, FigureSize } from '../../figures';
 import { ChartFrame } from './ChartFrame';
+import { ExportToolbar } from './ExportToolbar';
 import { figureHeight, useElementWidth } from './useElementWidth';
 import { useStaggeredValue } from './useStaggeredValue';
 
-/** Measures the available width, asks `build` for the figure at that size, and draws it or its reason for being absent. */
-export function FigureSlot({ build, testId }: { readonly build: (size: FigureSize) => Figure; readonly testId: string }): ReactNode {
+/** Measures the available width, asks `build` for the figure at that size, and draws it or its reason for being absent;
+ * with `exportId`, download buttons for it follow. */
+export function FigureSlot({
+  build,
+  testId,
+  exportId,
+}: {
+  readonly build: (size: FigureSize) => Figure;
+  readonly testId: string;
+  readonly exportId?: ExportFigureId | undefined;
+}): ReactNode {
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const w = Math.max(260, width);
   const h = figureHeight(width);
@@ -18,6 +28,7 @@ export function FigureSlot({ build, testId }: { readonly build: (size: FigureSiz
   return (
     <div ref={ref} className="figure-slot">
       {figure.kind === 'figure' ? <ChartFrame model={figure.model} testId={testId} /> : <p className="muted" role="note">{figure.message}</p>}
+      {figure.kind === 'figure' && exportId !== undefined && <ExportToolbar model={figure.model} figureId={exportId} />}
     </div>
   );
 }

@@ -19,7 +19,7 @@ function ConvergenceFigure({ data, label }: { readonly data: ConvergenceData; re
         <input type="checkbox" checked={showPaths} onChange={(event) => updateView({ showPaths: event.currentTarget.checked })} />
         Show sampled paths
       </label>
-      <FigureSlot build={build} testId="convergence-figure" />
+      <FigureSlot build={build} testId="convergence-figure" exportId={label === null ? 'convergence' : undefined} />
     </>
   );
 }

@@ -70,7 +70,7 @@ function EnvelopeView({ result }: { readonly result: AnalysisResult }) {
   return (
     <>
       <EnvelopeControls options={options} />
-      <FigureSlot build={build} testId="envelope-figure" />
+      <FigureSlot build={build} testId="envelope-figure" exportId="envelopes" />
       {table.exceedance.length > 0 && (
         <>
           <p className="hint">

@@ -122,8 +122,8 @@ function FluctuationView({ result }: { readonly result: AnalysisResult }) {
         </p>
       ) : (
         <div className="figure-pair">
-          <FigureSlot build={quantile} testId="fluctuation-qq-figure" />
-          <FigureSlot build={histogram} testId="fluctuation-histogram-figure" />
+          <FigureSlot build={quantile} testId="fluctuation-qq-figure" exportId="fluctuations-qq" />
+          <FigureSlot build={histogram} testId="fluctuation-histogram-figure" exportId="fluctuations-histogram" />
         </div>
       )}
       <TestNumbers statistics={statistics} />

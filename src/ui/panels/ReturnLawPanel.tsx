@@ -14,7 +14,7 @@ export function ReturnLawFigureAndNumbers({ result, n, testId }: { readonly resu
   const law = statistics.law;
   return (
     <>
-      <FigureSlot build={build} testId={testId} />
+      <FigureSlot build={build} testId={testId} exportId="return-law" />
       {law !== null && law.size > 0 && (
         <>
           <dl className="statistics" data-testid={`${testId}-statistics`}>

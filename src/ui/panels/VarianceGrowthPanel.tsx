@@ -7,7 +7,7 @@ import { useAppState } from '../store/store';
 
 function VarianceGrowthFigure({ result }: { readonly result: AnalysisResult }) {
   const build = useCallback((size: FigureSize) => varianceGrowthFigure(result, size), [result]);
-  return <FigureSlot build={build} testId="variance-figure" />;
+  return <FigureSlot build={build} testId="variance-figure" exportId="variance-growth" />;
 }
 
 /** Var(log R_n) against n and the fitted line whose slope is the variance-growth estimate of sigma^2. */
