@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import type { Download, Page } from '@playwright/test';
 import { twoStateChainText } from './sequenceFiles';
-import { collectErrors, screenshot } from './pageWatch';
+import { collectErrors, screenshot, shoot } from './pageWatch';
 
 const DEMO = 'Hill-top station wind sectors (invented)';
 // Invented chain parameters for generated files; no value of these files is ever a check value.
@@ -137,6 +137,7 @@ test('with a session open, a dropped file is checked against its SHA-256; a sess
   await other.getByLabel('Choose a sequence file').setInputFiles(data);
   await expect(other.getByTestId('data-check')).toHaveText('“chain.txt”: same data as the session (SHA-256 matches).');
   await screenshot(other, 'session-3-same-data');
+  await shoot(other.getByRole('region', { name: 'Session' }), 'session-4-same-data-panel');
   await other.getByLabel('Choose a sequence file').setInputFiles(changed);
   await expect(other.getByTestId('data-check')).toHaveText("“chain-changed.txt” is different data from the session's (SHA-256 differs).");
   await fresh.close();
