@@ -79,3 +79,11 @@ export { parrySource, goldenMeanSource } from './sources/parrySource';
 export { continuedFractionSource } from './sources/continuedFractionSource';
 export { renewalSource } from './sources/renewalSource';
 export { markovEntropyRate, markovVarentropyRate, stationaryDistribution } from './sources/markovEntropy';
+
+// Sessions: a saved analysis with the settings and view it was shown with
+export { SESSION_SCHEMA, sessionOf } from './session/session';
+export type { JsonObject, JsonValue, Session, SessionParts } from './session/session';
+export { writeSession } from './session/writeSession';
+export { readSession, looksLikeSession } from './session/readSession';
+export { SessionError } from './session/sessionError';
+export type { SessionErrorCode } from './session/sessionError';

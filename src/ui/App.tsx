@@ -10,14 +10,17 @@ import { LengthTablePanel } from './panels/LengthTablePanel';
 import { PreviewPanel } from './panels/PreviewPanel';
 import { ReturnLawPanel } from './panels/ReturnLawPanel';
 import { RunPanel } from './panels/RunPanel';
+import { SessionPanel } from './panels/SessionPanel';
 import { SettingsPanel } from './panels/SettingsPanel';
 import { SummaryPanel } from './panels/SummaryPanel';
 import { VarianceGrowthPanel } from './panels/VarianceGrowthPanel';
 import { openDemoIfEmpty } from './runner';
+import { whenHydrated } from './store/store';
 
 /** The workbench shell: header, controls on the left, results on the right. */
 export function App() {
-  useEffect(() => openDemoIfEmpty(), []);
+  // The saved state arrives asynchronously from IndexedDB; only then is it known whether the page is empty.
+  useEffect(() => whenHydrated(() => openDemoIfEmpty()), []);
   return (
     <div className="app">
       <header className="app-header">
@@ -34,6 +37,9 @@ export function App() {
           </ErrorBoundary>
           <ErrorBoundary name="Run">
             <RunPanel />
+          </ErrorBoundary>
+          <ErrorBoundary name="Session">
+            <SessionPanel />
           </ErrorBoundary>
           <ErrorBoundary name="Settings">
             <SettingsPanel />

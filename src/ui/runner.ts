@@ -1,10 +1,12 @@
-import { PREVIEW_BYTES, previewHead, SNIFF_BYTES } from '../core';
+import { looksLikeSession, PREVIEW_BYTES, previewHead, readSession, sessionOf, SNIFF_BYTES, writeSession } from '../core';
 import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
 import { demoScenario } from '../../workers/demoScenarios';
 import type { AnalysisClient, AnalysisProgress, CallOptions } from './analysisClient';
 import { createAnalysisClient } from './analysisClient';
+import { fileSha256 } from './fileDigest';
 import { DEFAULT_DEMO } from './store/inputSlice';
 import { previewOptionsFor, readerOptionsFor } from './view/inputOptions';
+import { sessionFileName } from './view/sessionFileName';
 import { appStore, bindActions } from './store/store';
 import type { StoreHandle } from './store/store';
 
@@ -20,7 +22,14 @@ export interface Runner {
   run(): Promise<void>;
   /** Stops the running analysis, if any. */
   cancel(): void;
+  /** Opens a saved session file: every view from its result, no computing; bad files get a message. */
+  openSession(file: File): Promise<void>;
+  /** The shown result as a session file (name and JSON text), or null when there is no result. */
+  sessionFile(savedAt?: Date): { name: string; text: string } | null;
 }
+
+/** Bytes of a file's head searched for a session's schema field; the writer puts it first. */
+const SESSION_HEAD_BYTES = 256;
 
 /** What a run listens to while it goes: progress and the finished rows of the per-n table. */
 type Listeners = Pick<CallOptions, 'onProgress' | 'onRows'>;
@@ -46,6 +55,8 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     try {
       const result = await call(own.signal, listeners, settings);
       actions.completeRun(id, result);
+      // The worker hashed the bytes it read: the check a session asks for comes free with the run.
+      if (result.input.sha256 !== null) actions.checkData(result.input.name, result.input.sha256);
     } catch (error) {
       if (own.signal.aborted) actions.cancelRun(id);
       else actions.failRun(id, error);
@@ -64,8 +75,46 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     }
   };
 
+  const openSession = async (chosen: File): Promise<void> => {
+    try {
+      const session = readSession(await chosen.text());
+      controller?.abort();
+      actions.openSession(session);
+    } catch (error) {
+      actions.sessionFailed(chosen.name, error);
+    }
+  };
+
+  let digest: AbortController | null = null;
+  /** With a session open, hashes the chosen file to tell whether it holds the session's data. */
+  const checkAgainstSession = async (chosen: File): Promise<void> => {
+    digest?.abort();
+    if (store.getState().session?.sha256 == null) return;
+    const own = new AbortController();
+    digest = own;
+    actions.checkData(chosen.name, 'checking');
+    try {
+      const sha = await fileSha256(chosen, own.signal);
+      if (file === chosen) actions.checkData(chosen.name, sha);
+    } catch (error) {
+      if (!own.signal.aborted && file === chosen) actions.checkData(chosen.name, null, `the file could not be read: ${errorMessage(error)}`);
+    }
+  };
+
+  const isSessionFile = async (chosen: File): Promise<boolean> => {
+    if (!/\.json$/i.test(chosen.name)) return false;
+    try {
+      return looksLikeSession(await chosen.slice(0, SESSION_HEAD_BYTES).text());
+    } catch {
+      return false;
+    }
+  };
+
   const openFile = async (chosen: File): Promise<void> => {
+    // A session file dropped or picked as data opens as a session.
+    if (await isSessionFile(chosen)) return openSession(chosen);
     file = chosen;
+    void checkAgainstSession(chosen);
     head = null;
     actions.chooseInput({ kind: 'file', name: chosen.name, bytes: chosen.size });
     actions.showPreview(null);
@@ -116,6 +165,13 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
       return runDemo(DEFAULT_DEMO.id, demoLength, DEFAULT_DEMO.seed);
     },
     cancel: () => controller?.abort(),
+    openSession,
+    sessionFile: (savedAt = new Date()) => {
+      const { result, settings, view, reading } = store.getState();
+      if (result === null) return null;
+      const text = writeSession(sessionOf({ result, settings, view, reading, savedAt: savedAt.toISOString() }));
+      return { name: sessionFileName(result.input.name), text };
+    },
   };
 }
 

@@ -1,4 +1,5 @@
-import { describe, expect, it } from 'vitest';
+import { createHash } from 'node:crypto';
+import { describe, expect, it, vi } from 'vitest';
 import type { AnalysisResult } from '../../src/core/result/analysisResult';
 import type { AnalysisClient, CallOptions } from '../../src/ui/analysisClient';
 import { createRunner, openDemoIfEmpty } from '../../src/ui/runner';
@@ -155,5 +156,54 @@ describe('runner', () => {
     openDemoIfEmpty(runner, s.store);
     await tick();
     expect(calls).toHaveLength(1);
+  });
+  it('sessionFile writes the shown result as a session that openSession shows again, numbers identical, without running', async () => {
+    const s = testStore();
+    const { client, calls } = fakeClient();
+    const runner = createRunner(client, s.store);
+    expect(runner.sessionFile()).toBeNull();
+    const result = fakeResult({ input: { name: 'a "b", <c>.txt', symbols: 10, alphabetSize: 2, sha256: null, format: 'chars' } });
+    s.completeRun(s.beginRun('x', 40), result);
+    s.updateView({ z: 3 });
+    const file = runner.sessionFile(new Date('2026-12-01T10:00:00Z'));
+    expect(file?.name).toBe('a _b_, _c_.txt.returnrate-session.json');
+
+    const other = testStore();
+    const second = createRunner(client, other.store);
+    await second.openFile(new File([file!.text], 'saved.json'));
+    expect(other.store.getState().result).toEqual(result);
+    expect(other.store.getState().view.z).toBe(3);
+    expect(other.store.getState().run).toEqual({ status: 'idle', note: 'Opened session saved 2026-12-01 10:00 UTC.' });
+    expect(other.store.getState().chosen).toBeNull();
+    expect(calls).toEqual([]);
+  });
+
+  it('a session of a newer schema gets the clear message and leaves the shown result', async () => {
+    const s = testStore();
+    const runner = createRunner(fakeClient().client, s.store);
+    const result = fakeResult();
+    s.completeRun(s.beginRun('x', 40), result);
+    const text = runner.sessionFile()!.text.replace('"returnrate.session/1"', '"returnrate.session/2"');
+    await runner.openSession(new File([text], 'future.json'));
+    expect(s.store.getState().failure).toEqual({
+      title: 'Could not open the session “future.json”',
+      message: 'this session was saved by a newer returnrate (schema returnrate.session/2); this version reads returnrate.session/1',
+    });
+    expect(s.store.getState().result).toBe(result);
+  });
+
+  it('a file opened after a session is hashed and said to be the same data or not', async () => {
+    const s = testStore();
+    const runner = createRunner(fakeClient().client, s.store);
+    const bytes = 'N NE E\nSE S SW\n';
+    // SHA-256 of the bytes above from Node's crypto (OpenSSL), independent of @noble/hashes.
+    const sha = createHash('sha256').update(bytes).digest('hex');
+    s.completeRun(s.beginRun('x', 40), fakeResult({ input: { name: 'wind.txt', symbols: 6, alphabetSize: 6, sha256: sha, format: 'tokens' } }));
+    await runner.openSession(new File([runner.sessionFile()!.text], 's.json'));
+    await runner.openFile(new File([bytes], 'wind-again.txt'));
+    await vi.waitFor(() => expect(s.store.getState().dataCheck).toEqual({ kind: 'same', name: 'wind-again.txt' }));
+    await runner.openFile(new File([bytes + 'N\n'], 'wind-longer.txt'));
+    await vi.waitFor(() => expect(s.store.getState().dataCheck).toEqual({ kind: 'different', name: 'wind-longer.txt' }));
+    expect(s.store.getState().preview).toMatchObject({ kind: 'ready', name: 'wind-longer.txt' });
   });
 });

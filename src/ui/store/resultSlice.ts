@@ -17,7 +17,7 @@ export const MAX_STORED_RESULT_CHARS = 400_000;
 /** The result as saved across reloads: whole when small, otherwise without its sampled paths. */
 export function resultForStorage(state: ResultState, maxChars = MAX_STORED_RESULT_CHARS): ResultState {
   const { result, pathsDropped } = state;
-  if (result === null || pathsDropped || JSON.stringify(result).length <= maxChars) return { result, pathsDropped };
+  if (result === null || pathsDropped || maxChars === Infinity || JSON.stringify(result).length <= maxChars) return { result, pathsDropped };
   return { result: { ...result, paths: { positions: [], logReturn: [] } }, pathsDropped: true };
 }
 

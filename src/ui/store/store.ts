@@ -5,20 +5,24 @@ import type { PersistStorage, StateStorage, StorageValue } from 'zustand/middlew
 import type { StoreApi } from 'zustand/vanilla';
 import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
-import { initialResultState, restoreResult, resultActions, resultForStorage } from './resultSlice';
+import { memoryStorage } from './memoryStorage';
+import { pageStorage } from './pageStorage';
+import { initialResultState, MAX_STORED_RESULT_CHARS, restoreResult, resultActions, resultForStorage } from './resultSlice';
 import type { ResultState } from './resultSlice';
 import { initialRunState, runActions } from './runSlice';
 import type { RunState } from './runSlice';
+import { initialSessionState, sessionActions } from './sessionSlice';
+import type { SessionState } from './sessionSlice';
 import { initialSettingsState, restoreSettings, settingsActions } from './settingsSlice';
 import type { SettingsState } from './settingsSlice';
 import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState & ViewState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
-/** Key and version of the saved state in localStorage; bump the version when its shape changes. */
+/** Key and version of the saved state (IndexedDB, formerly localStorage); bump the version when its shape changes. */
 export const STORAGE_KEY = 'returnrate.workbench';
 const STORAGE_VERSION = 1;
 
@@ -53,14 +57,25 @@ function sameParts(a: PersistedState, b: PersistedState): boolean {
  * and handing it to localStorage each time held the main thread 50 to 350 ms per update at 1e6
  * symbols (`npm run bench`, browser part). Every part is an immutable snapshot, so comparing
  * references is enough.
+ *
+ * Nothing is written before the saved state has been read: with an async storage (IndexedDB) the
+ * store starts from the initial state, and an update in that moment would overwrite the saved
+ * result with none.
  */
 function changedPartsStorage(storage: () => StateStorage): PersistStorage<PersistedState> | undefined {
   const json = createJSONStorage<PersistedState>(storage);
   if (json === undefined) return undefined;
   let written: StorageValue<PersistedState> | null = null;
+  let read = false;
   return {
-    getItem: (name) => json.getItem(name),
+    getItem: (name) => {
+      const value = json.getItem(name);
+      if (value instanceof Promise) return value.finally(() => void (read = true));
+      read = true;
+      return value;
+    },
     setItem: (name, value) => {
+      if (!read) return;
       if (written !== null && written.version === value.version && sameParts(written.state, value.state)) return;
       written = value;
       return json.setItem(name, value);
@@ -73,61 +88,62 @@ function changedPartsStorage(storage: () => StateStorage): PersistStorage<Persis
 }
 
 /** persistedPart with the saved form of the result kept per result: measuring its JSON size costs a serialization. */
-function memoPersistedPart(): (state: AppState) => PersistedState {
+function memoPersistedPart(maxResultChars: number): (state: AppState) => PersistedState {
   let source: ResultState | null = null;
   let saved: ResultState = initialResultState;
   const savedResult = (state: ResultState): ResultState => {
     if (source === null || source.result !== state.result || source.pathsDropped !== state.pathsDropped) {
       source = { result: state.result, pathsDropped: state.pathsDropped };
-      saved = resultForStorage(state);
+      saved = resultForStorage(state, maxResultChars);
     }
     return saved;
   };
   return (state) => persistedPart(state, savedResult);
 }
 
+export interface AppStoreOptions {
+  /** Saved results larger than this many characters of JSON lose their sampled paths; Infinity keeps them whole (IndexedDB). */
+  readonly maxResultChars?: number;
+}
+
 /**
- * One store for the whole page: the four slices' state, saved (settings and last result only) to
- * `storage` under STORAGE_KEY. Tests pass an in-memory storage.
+ * One store for the whole page: the slices' state, saved (settings, view, reading choices and the
+ * last result) to `storage` under STORAGE_KEY. Tests pass an in-memory storage.
  */
-export function createAppStore(storage: () => StateStorage) {
+export function createAppStore(storage: () => StateStorage, options: AppStoreOptions = {}) {
+  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState };
   return createStore<AppState>()(
-    persist(() => ({ ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState }), {
+    persist(() => initial, {
       name: STORAGE_KEY,
       version: STORAGE_VERSION,
       storage: changedPartsStorage(storage),
-      partialize: memoPersistedPart(),
+      partialize: memoPersistedPart(options.maxResultChars ?? MAX_STORED_RESULT_CHARS),
       merge: mergePersisted,
     }),
   );
 }
 
-/** An in-memory StateStorage, for tests and for pages where localStorage is unavailable. */
-export function memoryStorage(): StateStorage {
-  const items = new Map<string, string>();
-  return {
-    getItem: (name) => items.get(name) ?? null,
-    setItem: (name, value) => void items.set(name, value),
-    removeItem: (name) => void items.delete(name),
-  };
-}
-
-function pageStorage(): StateStorage {
-  try {
-    if (typeof localStorage !== 'undefined') return localStorage;
-  } catch {
-    // Access can throw when storage is disabled; the page then forgets on reload.
-  }
-  return memoryStorage();
-}
+export { memoryStorage };
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store) };
 }
 
-/** The page's store. */
-export const appStore = createAppStore(pageStorage);
+const page = pageStorage();
+/** The page's store, saved to IndexedDB where the browser has it (see pageStorage.ts). */
+export const appStore = createAppStore(() => page.storage, { maxResultChars: page.wholeResults ? Infinity : MAX_STORED_RESULT_CHARS });
+
+/** Calls `then` once the saved state has been read into the store (at once when it already has). */
+export function whenHydrated(then: () => void, store: Pick<typeof appStore, 'persist'> = appStore): void {
+  if (store.persist.hasHydrated()) then();
+  else {
+    const stop = store.persist.onFinishHydration(() => {
+      stop();
+      then();
+    });
+  }
+}
 
 /** Selects one field (or a derived value) of the page's store in a component. */
 export function useAppState<T>(selector: (state: AppState) => T): T {
@@ -151,4 +167,7 @@ export const {
   clearResult,
   updateView,
   resetView,
+  openSession,
+  sessionFailed,
+  checkData,
 } = bindActions(appStore);
