@@ -73,9 +73,10 @@ function legendBlock(entries: readonly LegendEntry[], left: number, top: number,
  * A figure model as a standalone SVG document: title, the plot (grid, spans, bands, every sample
  * path as an SVG path, lines, markers, axes), the legend and a caption naming the input, its
  * SHA-256, the settings and the program, all below the plot. Every text is escaped for XML; ids
- * and numbers are fixed, so the same model and caption give the same bytes.
+ * and numbers are fixed, so the same model and caption give the same bytes. `idPrefix` goes before
+ * every id (default none), so that several figures can sit in one HTML page without clashing ids.
  */
-export function figureSvg(model: FigureModel, caption: FigureCaption): string {
+export function figureSvg(model: FigureModel, caption: FigureCaption, idPrefix = ''): string {
   const { size, x, y } = model;
   // The plot keeps the model's own coordinates, shifted down by the title.
   const plot = model.plot;
@@ -90,12 +91,12 @@ export function figureSvg(model: FigureModel, caption: FigureCaption): string {
   const out: string[] = [];
   out.push('<?xml version="1.0" encoding="UTF-8"?>');
   out.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img" aria-labelledby="figure-title figure-desc">`,
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img" aria-labelledby="${idPrefix}figure-title ${idPrefix}figure-desc">`,
   );
-  out.push(`<title id="figure-title">${xmlText(model.title)}</title>`);
-  out.push(`<desc id="figure-desc">${xmlText(`${model.description} ${captionLines(caption).join('. ')}.`)}</desc>`);
+  out.push(`<title id="${idPrefix}figure-title">${xmlText(model.title)}</title>`);
+  out.push(`<desc id="${idPrefix}figure-desc">${xmlText(`${model.description} ${captionLines(caption).join('. ')}.`)}</desc>`);
   out.push(`<style>${STYLE}</style>`);
-  out.push(`<defs><clipPath id="plot-clip"><rect x="${f(plot.left)}" y="${f(plot.top)}" width="${f(plot.width)}" height="${f(plot.height)}"/></clipPath></defs>`);
+  out.push(`<defs><clipPath id="${idPrefix}plot-clip"><rect x="${f(plot.left)}" y="${f(plot.top)}" width="${f(plot.width)}" height="${f(plot.height)}"/></clipPath></defs>`);
   out.push(`<rect width="${width}" height="${height}" fill="#fff"/>`);
   out.push(`<text class="title" x="${f(plot.left)}" y="17">${xmlText(model.title)}</text>`);
   out.push(`<g transform="translate(0 ${TITLE_HEIGHT})">`);
@@ -103,7 +104,7 @@ export function figureSvg(model: FigureModel, caption: FigureCaption): string {
   for (const s of model.spans) {
     out.push(`<rect class="span" x="${f(s.from)}" y="${f(plot.top)}" width="${f(s.to - s.from)}" height="${f(plot.height)}" fill="${PALETTE.ink}" data-mark="span"/>`);
   }
-  out.push('<g clip-path="url(#plot-clip)">');
+  out.push(`<g clip-path="url(#${idPrefix}plot-clip)">`);
   for (const b of model.bands) out.push(`<path d="${b.path}" fill="${PALETTE[b.colour]}" opacity="${f(b.opacity)}" data-mark="band"/>`);
   const layer = model.pathLayer;
   if (layer !== null) {
