@@ -9,6 +9,7 @@ import type { CliIo } from './runCli';
 import { summaryText } from './summaryText';
 import { UsageError } from './usageError';
 import { writeFigures } from './writeFigures';
+import { writeReport } from './writeReport';
 
 type Values = Record<string, string | boolean | undefined>;
 
@@ -134,6 +135,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   if (values.figures !== undefined) {
     await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
   }
+  if (values.report !== undefined) await writeReport(result, String(values.report));
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {

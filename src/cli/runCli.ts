@@ -17,7 +17,7 @@ export interface CliIo {
 const HELP = `returnrate ${PROGRAM_VERSION}: entropy rate of a symbol sequence from the return times of its blocks
 
 usage
-  returnrate analyze FILE [reading options] [analysis options] [--json PATH|-] [--figures DIR] [--no-table] [--quiet]
+  returnrate analyze FILE [reading options] [analysis options] [--json PATH|-] [--figures DIR] [--report PATH.html] [--no-table] [--quiet]
   returnrate analyze --source SPEC --length L [--seed S] [analysis options]
   returnrate returns FILE --n N [reading options] [--out PATH]
   returnrate generate SOURCE --length L [--seed S] [--out PATH]
@@ -43,6 +43,8 @@ analysis options
       --figures DIR          write one SVG and one CSV per figure (convergence, envelopes,
                              variance-growth, fluctuations-qq, fluctuations-histogram, return-law)
                              into DIR, made when missing
+      --report PATH.html     write a one-file HTML report (estimates, every figure, settings,
+                             methods with citations, cautions) that prints to PDF from a browser
       --timing               print timing and peak memory as one JSON line on standard error
 
 reference sources (SPEC / SOURCE)
@@ -58,6 +60,7 @@ const OPTIONS = {
   ...ANALYSIS_OPTIONS,
   json: { type: 'string' },
   figures: { type: 'string' },
+  report: { type: 'string' },
   'no-table': { type: 'boolean' },
   quiet: { type: 'boolean', short: 'q' },
   timing: { type: 'boolean' },

@@ -13,7 +13,8 @@ const REASONS: Readonly<Record<string, string>> = {
   ENOSPC: 'no space left on the device',
 };
 
-function reason(e: unknown): string {
+/** Why a write failed, in words, with the system's code. */
+export function writeFailureReason(e: unknown): string {
   const code = (e as NodeJS.ErrnoException | null)?.code;
   return code === undefined ? String((e as Error | null)?.message ?? e) : `${REASONS[code] ?? 'write failed'}, ${code}`;
 }
@@ -28,7 +29,7 @@ export async function writeFigures(result: AnalysisResult, dir: string, note: (l
   try {
     await mkdir(dir, { recursive: true });
   } catch (e) {
-    throw new OutputError(`${dir}: cannot make the figures folder (${reason(e)})`, { cause: e });
+    throw new OutputError(`${dir}: cannot make the figures folder (${writeFailureReason(e)})`, { cause: e });
   }
   const written: string[] = [];
   for (const { id, figure, caption } of exportFigures(result)) {
@@ -44,7 +45,7 @@ export async function writeFigures(result: AnalysisResult, dir: string, note: (l
       try {
         await writeFile(path, text, 'utf8');
       } catch (e) {
-        throw new OutputError(`${path}: cannot write (${reason(e)})`, { cause: e });
+        throw new OutputError(`${path}: cannot write (${writeFailureReason(e)})`, { cause: e });
       }
       written.push(path);
     }
