@@ -1,5 +1,8 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import type { AnalysisResult } from '../../core';
+import { downloadBlob } from '../../export/downloadBlob';
+import { exportFileName } from '../../export/exportFileName';
+import { reportHtml } from '../../figures';
 import { useAppState } from '../store/store';
 import { summaryView } from '../view/summaryView';
 
@@ -88,7 +91,35 @@ function Summary({ result, stale }: { readonly result: AnalysisResult; readonly 
           </ul>
         </div>
       )}
+      <ReportButton result={result} />
     </>
+  );
+}
+
+/** Saves the one-file HTML report of the shown result, with the figures as the page's view options shape them. */
+function ReportButton({ result }: { readonly result: AnalysisResult }) {
+  const view = useAppState((s) => s.view);
+  const [problem, setProblem] = useState<string | null>(null);
+  const save = () => {
+    setProblem(null);
+    try {
+      const html = reportHtml(result, { date: new Date().toISOString(), view });
+      downloadBlob(new Blob([html], { type: 'text/html' }), exportFileName(result.input.name, 'report', 'html'));
+    } catch (e) {
+      setProblem(`The report could not be made: ${e instanceof Error ? e.message : String(e)}`);
+    }
+  };
+  return (
+    <div className="report-action">
+      <button type="button" onClick={save}>
+        Download report
+      </button>
+      {problem !== null && (
+        <p className="field-error" role="alert">
+          {problem}
+        </p>
+      )}
+    </div>
   );
 }
 
