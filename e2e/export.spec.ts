@@ -17,7 +17,7 @@ function pngSize(bytes: Buffer): { width: number; height: number } {
   return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
 }
 
-test('the convergence figure downloads as SVG, PNG 2x and CSV that match what is drawn', async ({ page }) => {
+test('the convergence figure downloads as SVG, PNG 1x, 2x and 4x and CSV that match what is drawn', async ({ page }) => {
   const errors = collectErrors(page);
   await page.setViewportSize({ width: 1280, height: 900 });
   await page.goto('/');
@@ -45,9 +45,12 @@ test('the convergence figure downloads as SVG, PNG 2x and CSV that match what is
   const width = Number(doc.documentElement?.getAttribute('width'));
   const height = Number(doc.documentElement?.getAttribute('height'));
 
-  const png = await download(page, 'PNG 2x');
-  expect(png.name).toMatch(/_convergence\.2x\.png$/);
-  expect(pngSize(png.bytes)).toEqual({ width: 2 * width, height: 2 * height });
+  for (const scale of [1, 2, 4]) {
+    const png = await download(page, `PNG ${scale}x`);
+    // 1x keeps the plain name; larger scales say theirs.
+    expect(png.name).toMatch(new RegExp(`_convergence${scale === 1 ? '' : `\\.${scale}x`}\\.png$`));
+    expect(pngSize(png.bytes)).toEqual({ width: scale * width, height: scale * height });
+  }
 
   const csv = await download(page, 'Download CSV');
   expect(csv.name).toMatch(/_convergence\.csv$/);
