@@ -36,6 +36,11 @@ test('Download report saves one HTML file that opens offline with all six figure
     await expect(report.locator('#cautions')).toContainText('not a diagnostic device');
     await expect(report.locator('script')).toHaveCount(0);
     await screenshot(report, 'report');
+    // Printing: chromium's own print to PDF (A4, print CSS) gives a document of several pages, each
+    // figure starting a new one, so at least 1 (tables) + 6 (figures) pages.
+    const pdf = (await report.pdf({ format: 'A4', printBackground: false })).toString('latin1');
+    expect(pdf.startsWith('%PDF-')).toBe(true);
+    expect((pdf.match(/\/Type\s*\/Page\b/g) ?? []).length).toBeGreaterThanOrEqual(7);
     expect(requests).toEqual([]);
     expect(reportErrors).toEqual([]);
   } finally {
