@@ -1,5 +1,5 @@
 import { execFile } from 'node:child_process';
-import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
@@ -75,7 +75,6 @@ test('(b) a chosen file is read and analysed', async ({ page }) => {
 });
 
 test('(b) the page and the command line give the same headline estimate', async ({ page }) => {
-  test.skip(!existsSync(CLI), 'src/cli/main.ts does not exist yet, so there is no command line to compare with');
   const file = tempFile('two-state-chain.txt', twoStateChainText(CHAIN_LENGTH, CHAIN_STAY, CHAIN_SEED));
   const cli = run('npx', ['tsx', CLI, 'analyze', file, '--json', '-'], { cwd: ROOT, maxBuffer: 1 << 28 });
   await page.goto('/');
