@@ -128,10 +128,9 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
     options.onLevel?.(level, activeLength);
   }
   const exhausted = n <= maxN;
-  // Every block is unique from here on: nothing returns, nothing matches.
+  // Every block is unique from here on: no classes, every position a singleton, nothing returns.
   for (; n <= maxN; n++) {
     const positions = N - n + 1;
-    // Every block occurs once: no classes, every position a singleton.
     const level = levelFromSums(n, positions, emptySums(bins, batchCount), positions, batchCount);
     levels.push(level);
     options.onLevel?.(level, 0);
