@@ -18,8 +18,13 @@ export async function svgToPng(svg: string, scale: number): Promise<Blob> {
   const url = URL.createObjectURL(new Blob([svg], { type: 'image/svg+xml' }));
   try {
     const image = new Image(width, height);
-    image.src = url;
-    await image.decode();
+    // The load event, not image.decode(): decode() of an SVG image is the less trodden path in
+    // browsers and, in one of our full browser-test runs, never delivered the PNG.
+    await new Promise<void>((resolve, reject) => {
+      image.onload = () => resolve();
+      image.onerror = () => reject(new Error('the browser could not load the figure as an image'));
+      image.src = url;
+    });
     const canvas = document.createElement('canvas');
     canvas.width = Math.round(width * scale);
     canvas.height = Math.round(height * scale);
