@@ -23,8 +23,8 @@ function lambda(model: ReturnType<typeof markovModelOfRows>, t: number): number 
     const w = new Float64Array(states);
     for (let s = 0; s < states; s++) {
       for (let j = 0; j < a; j++) {
-        const p = rows[s * a + j];
-        if (p > 0) w[s] += p ** (1 - t) * v[nextState[s * a + j]!]!;
+        const p = rows[s * a + j]!;
+        if (p > 0) w[s]! += p ** (1 - t) * v[nextState[s * a + j]!]!;
       }
     }
     let norm = 0;
@@ -122,7 +122,7 @@ describe('fittedMarkovModel', () => {
     expect(Array.from(generateFromModel(model, 1000, 7))).toEqual(Array.from(a.subarray(0, 1000)));
     // Fraction of 1s: pi_1 = 0.2; the long-run variance of the indicator of state 1 is
     // pi_1 pi_0 (1 + lambda)/(1 - lambda) with lambda = 1 - a - b = 0.5 (from memory), i.e. 0.48.
-    const ones = a.reduce((s, x) => s + x, 0) / a.length;
+    const ones = Array.from(a).reduce((s, x) => s + x, 0) / a.length;
     expect(Math.abs(ones - 0.2)).toBeLessThan(4 * Math.sqrt(0.48 / a.length));
   });
 });
