@@ -106,4 +106,4 @@ export {
   checkReplicates,
   fitCalibrationModel,
 } from './calibration/calibrationResult';
-export type { CalibrationModel, CalibrationModelFacts, CalibrationResult } from './calibration/calibrationResult';
+export type { CalibratedAnalysis, CalibrationModel, CalibrationModelFacts, CalibrationResult } from './calibration/calibrationResult';

@@ -93,9 +93,16 @@ export function checkReplicates(replicates: number): void {
   }
 }
 
+/** What a calibration needs of the analysis it calibrates (an AnalysisResult has all of it). */
+export interface CalibratedAnalysis {
+  readonly input: Pick<AnalysisResult['input'], 'name' | 'sha256' | 'symbols'>;
+  readonly settings: AnalysisSettings;
+  readonly entropy: Pick<AnalysisResult['entropy'], 'estimate' | 'ci95'>;
+}
+
 /** Assembles the calibration of `analysis` from the model and the merged records of any workers. */
 export function calibrationResult(
-  analysis: AnalysisResult,
+  analysis: CalibratedAnalysis,
   facts: CalibrationModelFacts,
   records: readonly ReplicateRecord[],
   replicatesRequested: number,
