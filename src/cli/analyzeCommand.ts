@@ -137,7 +137,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   const calibration =
-    calibrate === undefined ? null : runCalibration(loaded.sequence, result, calibrate, calibrateSeed, progress !== null, io);
+    calibrate === undefined ? null : await runCalibration(loaded.sequence, result, calibrate, calibrateSeed, progress !== null, io);
   await emit(calibration === null ? result : { ...result, calibration }, [result], values, io);
   if (calibration !== null && values.json !== '-' && values.quiet !== true) {
     io.stdout.write(calibrationText(calibration, result.entropy.unit, result.sigma2.unit));

@@ -47,7 +47,7 @@ analysis options
                              methods with citations, cautions) that prints to PDF from a browser
       --calibrate R          after the analysis, fit a Markov chain (order by BIC) to the data and analyse
                              R >= 10 surrogates of the same length from it: bias, spread and coverage
-                             at this N, and h corrected by the bias (one thread; slow: R analyses)
+                             at this N, and h corrected by the bias (two worker threads; R analyses)
       --calibrate-seed S     base seed of the surrogates (default 1)
       --timing               print timing and peak memory as one JSON line on standard error
 
