@@ -27,7 +27,7 @@ function startCalibrationWorker(): Worker {
 }
 
 /** navigator.hardwareConcurrency capped at MAX_CALIBRATION_WORKERS (1 where unknown). */
-export function calibrationPoolSize(cores: number | undefined = globalThis.navigator?.hardwareConcurrency): number {
+export function calibrationPoolSize(cores: number | undefined): number {
   return Math.max(1, Math.min(MAX_CALIBRATION_WORKERS, Number.isInteger(cores) && cores !== undefined ? cores : 1));
 }
 
@@ -41,7 +41,7 @@ function abortError(signal: AbortSignal): unknown {
  * that only termination stops. Replicates are handed out one at a time from a shared counter, so a
  * fast worker takes more of them and progress arrives per replicate.
  */
-export function createCalibrationClient(start: () => CalibrationWorkerLike = startCalibrationWorker, poolSize = calibrationPoolSize()): CalibrationClient {
+export function createCalibrationClient(start: () => CalibrationWorkerLike = startCalibrationWorker, poolSize = calibrationPoolSize(globalThis.navigator?.hardwareConcurrency)): CalibrationClient {
   return {
     async calibrate(input, settings, replicates, baseSeed, call) {
       const { signal } = call;
