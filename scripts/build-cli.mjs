@@ -7,8 +7,10 @@ import { fileURLToPath } from 'node:url';
 const root = fileURLToPath(new URL('..', import.meta.url));
 await build({
   absWorkingDir: root,
-  entryPoints: ['src/cli/main.ts'],
-  outfile: 'dist-cli/returnrate.mjs',
+  // The calibration's worker thread is a second entry, loaded next to the bundle (runCalibration.ts).
+  entryPoints: { returnrate: 'src/cli/main.ts', 'calibration-thread': 'src/cli/calibrationThread.ts' },
+  outdir: 'dist-cli',
+  outExtension: { '.js': '.mjs' },
   bundle: true,
   platform: 'node',
   format: 'esm',

@@ -1,10 +1,12 @@
 import { basename } from 'node:path';
 import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
 import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
+import { calibrationText } from './calibrationText';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
+import { runCalibration } from './runCalibration';
 import type { CliIo } from './runCli';
 import { summaryText } from './summaryText';
 import { UsageError } from './usageError';
@@ -113,7 +115,10 @@ function progressLine(io: CliIo, values: Values, maxN: number, started: number):
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   const options = settingsFrom(values);
+  const calibrate = numberOption(values, 'calibrate', (x) => Number.isInteger(x) && x >= 10 && x <= 100000, 'a whole number of replicates from 10 to 100000');
+  const calibrateSeed = numberOption(values, 'calibrate-seed', Number.isSafeInteger, 'a whole number') ?? 1;
   const loaded = await load(file, values, io);
+  if (loaded.separate !== null && calibrate !== undefined) throw new UsageError('--calibrate works on one sequence, not with --fasta-records separate');
   if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const t1 = performance.now();
@@ -131,7 +136,12 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   });
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
-  await emit(result, [result], values, io);
+  const calibration =
+    calibrate === undefined ? null : await runCalibration(loaded.sequence, result, calibrate, calibrateSeed, progress !== null, io);
+  await emit(calibration === null ? result : { ...result, calibration }, [result], values, io);
+  if (calibration !== null && values.json !== '-' && values.quiet !== true) {
+    io.stdout.write(calibrationText(calibration, result.entropy.unit, result.sigma2.unit));
+  }
   if (values.figures !== undefined) {
     await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
   }

@@ -45,6 +45,10 @@ analysis options
                              into DIR, made when missing
       --report PATH.html     write a one-file HTML report (estimates, every figure, settings,
                              methods with citations, cautions) that prints to PDF from a browser
+      --calibrate R          after the analysis, fit a Markov chain (order by BIC) to the data and analyse
+                             R >= 10 surrogates of the same length from it: bias, spread and coverage
+                             at this N, and h corrected by the bias (two worker threads; R analyses)
+      --calibrate-seed S     base seed of the surrogates (default 1)
       --timing               print timing and peak memory as one JSON line on standard error
 
 reference sources (SPEC / SOURCE)
@@ -65,6 +69,8 @@ const OPTIONS = {
   quiet: { type: 'boolean', short: 'q' },
   timing: { type: 'boolean' },
   progress: { type: 'boolean' },
+  calibrate: { type: 'string' },
+  'calibrate-seed': { type: 'string' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },
   seed: { type: 'string', short: 's' },

@@ -87,3 +87,23 @@ export { writeSession } from './session/writeSession';
 export { readSession, looksLikeSession } from './session/readSession';
 export { SessionError } from './session/sessionError';
 export type { SessionErrorCode } from './session/sessionError';
+
+// Calibration at the data's own length: Markov surrogates of the order BIC picks
+export { markovOrderFit, orderCap, MIN_MEAN_PER_CELL, MAX_FITTED_ORDER } from './calibration/markovOrderFit';
+export type { MarkovOrderFit, OrderScore } from './calibration/markovOrderFit';
+export { fittedMarkovModel, markovModelOfRows, generateFromModel } from './calibration/fittedMarkovModel';
+export type { FittedMarkovModel } from './calibration/fittedMarkovModel';
+export { surrogateStudy, runReplicate, replicateSeed, MAX_REPLICATES } from './calibration/surrogateStudy';
+export type { ReplicateRecord, StudyHooks } from './calibration/surrogateStudy';
+export { calibrationSummary } from './calibration/calibrationSummary';
+export type { CalibrationSummary, EstimatorCalibration, CorrectedEstimate, UserEstimate } from './calibration/calibrationSummary';
+export {
+  CALIBRATION_SCHEMA,
+  MIN_CALIBRATION_REPLICATES,
+  calibrateSequence,
+  calibrationModelFacts,
+  calibrationResult,
+  checkReplicates,
+  fitCalibrationModel,
+} from './calibration/calibrationResult';
+export type { CalibratedAnalysis, CalibrationModel, CalibrationModelFacts, CalibrationResult } from './calibration/calibrationResult';

@@ -2,6 +2,7 @@ import { looksLikeSession, PREVIEW_BYTES, previewHead, readSession, sessionOf, S
 import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
 import { demoScenario } from '../../workers/demoScenarios';
 import type { AnalysisClient, AnalysisProgress, CallOptions } from './analysisClient';
+import type { CalibrationInput } from './calibrationClient';
 import { createAnalysisClient } from './analysisClient';
 import { fileSha256 } from './fileDigest';
 import { DEFAULT_DEMO } from './store/inputSlice';
@@ -26,6 +27,9 @@ export interface Runner {
   openSession(file: File): Promise<void>;
   /** The shown result as a session file (name and JSON text), or null when there is no result. */
   sessionFile(savedAt?: Date): { name: string; text: string } | null;
+  /** The input of the shown result (the File and its reading options, or the demo), while this page
+   * still holds it; null after a reload or an opened session. The calibration reads it again. */
+  calibrationInput(): CalibrationInput | null;
 }
 
 /** Bytes of a file's head searched for a session's schema field; the writer puts it first. */
@@ -44,8 +48,10 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
   let controller: AbortController | null = null;
   let file: File | null = null;
   let head: Uint8Array | null = null;
+  /** The input of the last finished run and its result, for the calibration. */
+  let lastRun: { input: CalibrationInput; result: AnalysisResult } | null = null;
 
-  const execute = async (label: string, call: Call): Promise<void> => {
+  const execute = async (label: string, call: Call, input: () => CalibrationInput | null = () => null): Promise<void> => {
     controller?.abort();
     const own = new AbortController();
     controller = own;
@@ -55,6 +61,8 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     try {
       const result = await call(own.signal, listeners, settings);
       actions.completeRun(id, result);
+      const used = input();
+      lastRun = used === null ? null : { input: used, result };
       // The worker hashed the bytes it read: the check a session asks for comes free with the run.
       if (result.input.sha256 !== null) actions.checkData(result.input.name, result.input.sha256);
     } catch (error) {
@@ -130,11 +138,18 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
 
   const runFile = (f: File): Promise<void> => {
     const { reading } = store.getState();
-    return execute(`“${f.name}”`, async (signal, listeners, settings) => {
-      const text = reading.format === 'auto' ? await f.slice(0, SNIFF_BYTES).text() : '';
-      const options = { ...readerOptionsFor(f.name, text, reading), name: f.name };
-      return client.analyzeFile(f, options, settings, { signal, ...listeners });
-    });
+    let used: CalibrationInput | null = null;
+    return execute(
+      `“${f.name}”`,
+      async (signal, listeners, settings) => {
+        const text = reading.format === 'auto' ? await f.slice(0, SNIFF_BYTES).text() : '';
+        const options = { ...readerOptionsFor(f.name, text, reading), name: f.name };
+        const { name: _name, ...readerOptions } = options;
+        used = { kind: 'file', file: f, options: readerOptions };
+        return client.analyzeFile(f, options, settings, { signal, ...listeners });
+      },
+      () => used,
+    );
   };
 
   const chooseDemo = (id: string): void => {
@@ -146,7 +161,11 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
 
   const runDemo = (id: string, length: number, seed: number): Promise<void> => {
     const { title } = demoScenario(id);
-    return execute(title, (signal, listeners, settings) => client.analyzeDemo(id, length, seed, settings, { signal, ...listeners }));
+    return execute(
+      title,
+      (signal, listeners, settings) => client.analyzeDemo(id, length, seed, settings, { signal, ...listeners }),
+      () => ({ kind: 'demo', id, length, seed }),
+    );
   };
 
   return {
@@ -172,6 +191,7 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
       const text = writeSession(sessionOf({ result, settings, view, reading, savedAt: savedAt.toISOString() }));
       return { name: sessionFileName(result.input.name), text };
     },
+    calibrationInput: () => (lastRun !== null && lastRun.result === store.getState().result ? lastRun.input : null),
   };
 }
 

@@ -3,6 +3,8 @@ import { useStore } from 'zustand';
 import { createJSONStorage, persist } from 'zustand/middleware';
 import type { PersistStorage, StateStorage, StorageValue } from 'zustand/middleware';
 import type { StoreApi } from 'zustand/vanilla';
+import { calibrationActions, initialCalibrationState, restoreCalibration } from './calibrationSlice';
+import type { CalibrationState } from './calibrationSlice';
 import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
 import { memoryStorage } from './memoryStorage';
@@ -18,7 +20,7 @@ import type { SettingsState } from './settingsSlice';
 import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState & CalibrationState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
@@ -28,10 +30,18 @@ const STORAGE_VERSION = 1;
 
 /** The part that survives a reload: settings, reading choices, demo length, view options and the
  * last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'>;
+export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'> & CalibrationState;
 
 export function persistedPart(state: AppState, savedResult: (state: ResultState) => ResultState = resultForStorage): PersistedState {
-  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...savedResult(state) };
+  return {
+    settings: state.settings,
+    reading: state.reading,
+    demoLength: state.demoLength,
+    view: state.view,
+    ...savedResult(state),
+    calibration: state.calibration,
+    calibrationReplicates: state.calibrationReplicates,
+  };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
@@ -44,6 +54,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
     demoLength: restoreDemoLength(s.demoLength),
     view: restoreView(s.view),
     ...restoreResult(s),
+    ...restoreCalibration(s),
   };
 }
 
@@ -111,7 +122,7 @@ export interface AppStoreOptions {
  * last result) to `storage` under STORAGE_KEY. Tests pass an in-memory storage.
  */
 export function createAppStore(storage: () => StateStorage, options: AppStoreOptions = {}) {
-  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState };
+  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState, ...initialCalibrationState };
   return createStore<AppState>()(
     persist(() => initial, {
       name: STORAGE_KEY,
@@ -127,7 +138,7 @@ export { memoryStorage };
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store), ...calibrationActions(store) };
 }
 
 const page = pageStorage();
@@ -170,4 +181,6 @@ export const {
   openSession,
   sessionFailed,
   checkData,
+  setCalibrationReplicates,
+  clearCalibration,
 } = bindActions(appStore);
