@@ -82,7 +82,7 @@ describe('ordinalPatterns', () => {
       for (let k = 0; k < bits.length; k++) bits[k] = rand.next() < 0.5 ? 0 : 1;
       for (let t = 0; t < 3; t++) {
         let y = 0;
-        for (let k = bitsPerPoint - 1; k >= 0; k--) y = (y + bits[t + k]) / 2;
+        for (let k = bitsPerPoint - 1; k >= 0; k--) y = (y + (bits[t + k] ?? 0)) / 2;
         values[3 * s + t] = Math.sin(Math.PI * y) ** 2;
       }
       segments.push({ name: `sample ${s}`, start: 3 * s, length: 3 });
