@@ -26,6 +26,12 @@ export type { NumericSeriesReader } from './symbolize/numericSeriesReader';
 export type { NumericSeries } from './symbolize/seriesCollector';
 export { symbolizeSeries } from './symbolize/symbolizeSeries';
 export type { SymbolizedSeries } from './symbolize/symbolizeSeries';
+export { symbolizationSummary } from './symbolize/symbolizationSummary';
+export type { SymbolizationSummary, SummaryOptions } from './symbolize/symbolizationSummary';
+export { valueHistogram } from './symbolize/valueHistogram';
+export type { ValueHistogram } from './symbolize/valueHistogram';
+export { downsampleMinMax } from './symbolize/downsampleMinMax';
+export type { DownsampledSeries } from './symbolize/downsampleMinMax';
 
 // The return-time engine
 export { scanReturns, ScanCancelled } from './returns/scanReturns';

@@ -33,3 +33,5 @@ export { exportCaption, exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, E
 export type { ExportFigureId, ExportedFigure, ExportViewOptions } from './exportFigures';
 export { reportHtml, looksPhysiological } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
+export { symbolizationSeriesFigure, symbolizationHistogramFigure, SYMBOLIZATION_STYLES } from './symbolizationFigures';
+export { symbolizationText, symbolizationMethod } from './symbolizationText';
