@@ -1,9 +1,11 @@
 import { useEffect, useState } from 'react';
 import type { DragEvent } from 'react';
 import { runner } from '../runner';
-import type { AmbiguityChoice, FormatChoice, ReadingChoices } from '../store/inputSlice';
+import type { MissingPolicy } from '../../core';
+import { SYMBOLIZE_DEFAULT_PARAMETER } from '../store/inputSlice';
+import type { AmbiguityChoice, FormatChoice, ReadingChoices, SymbolizeKind } from '../store/inputSlice';
 import { updateReading, useAppState } from '../store/store';
-import { AMBIGUITY_CHOICES, FORMAT_CHOICES } from '../view/inputOptions';
+import { AMBIGUITY_CHOICES, FORMAT_CHOICES, MISSING_CHOICES, SYMBOLIZE_CHOICES } from '../view/inputOptions';
 
 function openFirst(files: FileList | null | undefined): void {
   const file = files?.[0];
@@ -110,6 +112,7 @@ export function InputPanel() {
           CSV column: a header name, or a 0-based index.
         </p>
       )}
+      {(shown === 'csv' || shown === 'numbers' || shown === 'auto') && <SymbolizeFields reading={reading} />}
       <div className="check-row">
         {shown === 'csv' && (
           <label className="check">
@@ -147,5 +150,48 @@ export function InputPanel() {
         )}
       </div>
     </section>
+  );
+}
+
+/** How real numbers become symbols, and what happens to missing values (numbers and CSV input). */
+function SymbolizeFields({ reading }: { readonly reading: ReadingChoices }) {
+  const choice = SYMBOLIZE_CHOICES.find((c) => c.value === reading.symbolizeKind);
+  return (
+    <div className="field-row">
+      <label className="field">
+        <span>Symbolize numbers</span>
+        <select
+          value={reading.symbolizeKind}
+          onChange={(event) => {
+            const kind = event.currentTarget.value as SymbolizeKind;
+            changeReading({ symbolizeKind: kind, symbolizeParameter: SYMBOLIZE_DEFAULT_PARAMETER[kind] });
+          }}
+        >
+          {SYMBOLIZE_CHOICES.map((c) => (
+            <option key={c.value} value={c.value}>
+              {c.label}
+            </option>
+          ))}
+        </select>
+      </label>
+      {reading.symbolizeKind !== 'none' && (
+        <>
+          <label className="field">
+            <span>{choice?.parameter ?? 'Parameter'}</span>
+            <input type="text" value={reading.symbolizeParameter} onChange={(event) => changeReading({ symbolizeParameter: event.currentTarget.value })} />
+          </label>
+          <label className="field">
+            <span>Missing values</span>
+            <select value={reading.missing} onChange={(event) => changeReading({ missing: event.currentTarget.value as MissingPolicy })}>
+              {MISSING_CHOICES.map((c) => (
+                <option key={c.value} value={c.value}>
+                  {c.label}
+                </option>
+              ))}
+            </select>
+          </label>
+        </>
+      )}
+    </div>
   );
 }
