@@ -1,5 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, createDigestingReader, lengthRowOfLevel, recordSequences } from '../src/core';
+import { analyzeSequence, createDigestingReader, lengthRowOfLevel, longestSegment } from '../src/core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
@@ -68,11 +68,9 @@ function readBuffer(buffer: ArrayBuffer, options: ReaderOptions): ReadResult & {
  */
 function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: Sequence; warnings: ReadResult['warnings'] } {
   if (options.missing !== 'split' || read.records === undefined || read.records.length <= 1) return { sequence: read.sequence, warnings: read.warnings };
-  const parts = recordSequences(read.sequence, read.records);
-  let longest = parts[0];
-  for (const part of parts) if (longest === undefined || part.sequence.symbols.length > longest.sequence.symbols.length) longest = part;
-  if (longest === undefined) return { sequence: read.sequence, warnings: read.warnings };
-  const message = `the series was cut into ${parts.length} segments at missing values; the page analyses the longest, ${longest.record.name} (${longest.sequence.symbols.length} symbols); the command line analyses every segment (--missing split)`;
+  const longest = longestSegment(read.sequence, read.records);
+  if (longest === null) return { sequence: read.sequence, warnings: read.warnings };
+  const message = `the series was cut into ${read.records.length} segments at missing values; the page analyses the longest, ${longest.record.name} (${longest.sequence.symbols.length} symbols); the command line analyses every segment (--missing split)`;
   return { sequence: longest.sequence, warnings: [...read.warnings, { code: 'segment-analysed', message }] };
 }
 

@@ -27,6 +27,7 @@ export type { NumericSeries } from './symbolize/seriesCollector';
 export { symbolizeSeries } from './symbolize/symbolizeSeries';
 export type { SymbolizedSeries } from './symbolize/symbolizeSeries';
 export { symbolizationSummary } from './symbolize/symbolizationSummary';
+export { longestSegment } from './symbolize/longestSegment';
 export type { SymbolizationSummary, SummaryOptions } from './symbolize/symbolizationSummary';
 export { valueHistogram } from './symbolize/valueHistogram';
 export type { ValueHistogram } from './symbolize/valueHistogram';

@@ -99,3 +99,15 @@ describe('symbolizeSeries', () => {
     expect(s.record.cells.map((c) => c.count)).toEqual([pairs, pairs]);
   });
 });
+
+describe('longestSegment', () => {
+  it('picks the longest segment (the first among equals) as a view with its own counts', async () => {
+    const { longestSegment } = await import('../../../src/core/symbolize/longestSegment');
+    const s = symbolizeSeries(series([1, 2, 3, 4, 5, 6, 7], [[0, 2], [2, 3], [5, 2]]), { kind: 'threshold', cuts: [3.5] });
+    const best = longestSegment(s.sequence, s.records);
+    expect(best?.record.name).toBe('segment 2');
+    // Values 3, 4, 5 against the cut 3.5: one below, two above (by hand).
+    expect(Array.from(best?.sequence.counts ?? [])).toEqual([1, 2]);
+    expect(longestSegment(s.sequence, [])).toBeNull();
+  });
+});
