@@ -1,7 +1,7 @@
 import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import type { Page } from '@playwright/test';
-import { collectErrors, ROOT, screenshot } from './pageWatch';
+import { collectErrors, ROOT, screenshot, shoot } from './pageWatch';
 
 // The invented real-valued demo file (public/demos/README.md); nothing in it is a check value.
 const POND = join(ROOT, 'public', 'demos', 'garden-pond-level.csv');
@@ -35,6 +35,7 @@ test('a real-valued file: choose quantile 4, see series, histogram and cut point
   await expect(cells).toContainText('q1');
   await expect(cells).toContainText('q4');
   await screenshot(page, 'symbolize-1-preview-quantile');
+  await shoot(symbolization, 'symbolize-1-preview-figures');
 
   // A bad parameter says what is wrong, in the preview, before any run.
   await page.getByRole('textbox', { name: 'Cells K' }).fill('1');

@@ -66,7 +66,8 @@ export interface ReadWarning {
 }
 
 export interface ReadResult {
-  /** Symbol ids are assigned in order of first appearance: the first symbol read is id 0. */
+  /** Symbol ids are assigned in order of first appearance: the first symbol read is id 0 (a
+   * symbolized series instead numbers its cells in cell order, see src/core/symbolize). */
   sequence: Sequence;
   /** fasta only: one entry per record, in file order. */
   records?: FastaRecord[];
