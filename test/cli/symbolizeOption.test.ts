@@ -91,3 +91,13 @@ describe('analyze --symbolize', () => {
     expect(run.stderr.trim().split('\n')).toHaveLength(1);
   });
 });
+
+describe('returns --symbolize', () => {
+  it('writes the returns of the symbolized series, and refuses --missing split', async () => {
+    const ok = await cli('returns', lines, '--format', 'numbers', '--symbolize', 'threshold:0.5', '--n', '2');
+    expect(ok.code).toBe(0);
+    const split = await cli('returns', lines, '--format', 'numbers', '--symbolize', 'threshold:0.5', '--missing', 'split', '--n', '2');
+    expect(split.code).toBe(2);
+    expect(split.stderr).toMatch(/returns reads one sequence/);
+  });
+});

@@ -112,7 +112,8 @@ export function InputPanel() {
           CSV column: a header name, or a 0-based index.
         </p>
       )}
-      {(shown === 'csv' || shown === 'numbers' || shown === 'auto') && <SymbolizeFields reading={reading} />}
+      {/* Under 'auto' a file of numbers looks like tokens until a symbolization is chosen, so the choice is always offered there. */}
+      {(reading.format === 'auto' || shown === 'csv' || shown === 'numbers') && <SymbolizeFields reading={reading} />}
       <div className="check-row">
         {shown === 'csv' && (
           <label className="check">
