@@ -50,6 +50,8 @@ describe('analyze --symbolize', () => {
     // N = 4000 distinct values, K = 4: the stated quantile rule gives exactly N/K values per cell.
     expect(s?.cells.map((c) => c.count)).toEqual([1000, 1000, 1000, 1000]);
     expect(run.stderr).toMatch(/note: 2 missing values \(first at line 1002\)/);
+    const text = await cli('analyze', csv, '--column', 'level', '--symbolize', 'quantile:4', '--max-n', '6', '--no-table');
+    expect(text.stdout).toMatch(/symbolized quantile:4, cut points [-0-9.]+, [-0-9.]+, [-0-9.]+; 2 missing values skipped/);
   });
 
   it('reads one number per line with --format numbers and ordinal patterns', async () => {
