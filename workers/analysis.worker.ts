@@ -1,6 +1,6 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, createDigestingReader, lengthRowOfLevel } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions } from '../src/core';
+import { analyzeSequence, createDigestingReader, lengthRowOfLevel, longestSegment } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
@@ -61,6 +61,19 @@ function readBuffer(buffer: ArrayBuffer, options: ReaderOptions): ReadResult & {
   return reader.finish();
 }
 
+/**
+ * The sequence the page analyses: the whole input, or under missing 'split' the longest segment of
+ * the series (blocks may not cross a cut, and the page shows one result; the command line analyses
+ * every segment), with a warning that says so.
+ */
+function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: Sequence; warnings: ReadResult['warnings'] } {
+  if (options.missing !== 'split' || read.records === undefined || read.records.length <= 1) return { sequence: read.sequence, warnings: read.warnings };
+  const longest = longestSegment(read.sequence, read.records);
+  if (longest === null) return { sequence: read.sequence, warnings: read.warnings };
+  const message = `the series was cut into ${read.records.length} segments at missing values; the page analyses the longest, ${longest.record.name} (${longest.sequence.symbols.length} symbols); the command line analyses every segment (--missing split)`;
+  return { sequence: longest.sequence, warnings: [...read.warnings, { code: 'segment-analysed', message }] };
+}
+
 function release(callback: ProgressCallback): void {
   (callback as Partial<Record<typeof releaseProxy, () => void>>)[releaseProxy]?.();
 }
@@ -71,8 +84,10 @@ const api = {
     try {
       const { name, ...readerOptions } = options;
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
-      const result = analyzeSequence(read.sequence, { name, sha256: read.sha256, format: readerOptions.format }, settings, levelHooks(settings, onProgress));
-      return read.warnings.length === 0 ? result : { ...result, warnings: [...read.warnings, ...result.warnings] };
+      const { sequence, warnings } = symbolizedPart(read, readerOptions);
+      const summary = { name, sha256: read.sha256, format: readerOptions.format, ...(read.symbolization === undefined ? {} : { symbolization: read.symbolization }) };
+      const result = analyzeSequence(sequence, summary, settings, levelHooks(settings, onProgress));
+      return warnings.length === 0 ? result : { ...result, warnings: [...warnings, ...result.warnings] };
     } finally {
       release(onProgress);
     }

@@ -1,6 +1,6 @@
 import { basename } from 'node:path';
 import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
-import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
+import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
@@ -17,7 +17,7 @@ type Values = Record<string, string | boolean | undefined>;
 
 interface Loaded {
   sequence: Sequence;
-  input: { name: string; sha256: string | null; format: string };
+  input: { name: string; sha256: string | null; format: string; symbolization?: SymbolizationRecord };
   reference: ReferenceFacts | undefined;
   readSeconds: number;
   /** FASTA records to analyse one by one (--fasta-records separate), else null. */
@@ -47,10 +47,11 @@ async function load(file: string | undefined, values: Values, io: CliIo): Promis
   for (const w of read.warnings) io.stderr.write(`returnrate: note: ${w.message}\n`);
   return {
     sequence: read.sequence,
-    input: { name: basename(file), sha256: read.sha256, format: options.format },
+    input: { name: basename(file), sha256: read.sha256, format: options.format, ...(read.symbolization === undefined ? {} : { symbolization: read.symbolization }) },
     reference: undefined,
     readSeconds: (performance.now() - t0) / 1000,
-    separate: options.format === 'fasta' && options.fastaRecords === 'separate' && read.records !== undefined ? read.records : null,
+    // FASTA records analysed apart, and the segments of a series cut at missing values (--missing split).
+    separate: ((options.format === 'fasta' && options.fastaRecords === 'separate') || options.missing === 'split') && read.records !== undefined ? read.records : null,
   };
 }
 
@@ -74,14 +75,15 @@ async function analyzeRecords(loaded: Loaded, records: FastaRecord[], options: A
   const results: AnalysisResult[] = [];
   for (const { record, sequence } of recordSequences(loaded.sequence, records)) {
     if (sequence.symbols.length < 2) {
-      io.stderr.write(`returnrate: note: record "${record.name}" has ${sequence.symbols.length} symbol(s) and is left out\n`);
+      const what = loaded.input.format === 'fasta' ? 'record ' : '';
+      io.stderr.write(`returnrate: note: ${what}"${record.name}" has ${sequence.symbols.length} symbol(s) and is left out\n`);
       continue;
     }
     const settings = fitMaxN(options, sequence.symbols.length, false);
     const input = { ...loaded.input, name: `${loaded.input.name} > ${record.name || '(no header)'}` };
     results.push(analyzeSequence(sequence, input, settings));
   }
-  if (results.length === 0) throw new RangeError('no FASTA record holds at least 2 symbols');
+  if (results.length === 0) throw new RangeError(`no ${loaded.input.format === 'fasta' ? 'FASTA record' : 'segment'} holds at least 2 symbols`);
   await emit({ schema: ANALYSIS_SET_SCHEMA, records: results }, results, values, io);
 }
 

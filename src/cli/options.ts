@@ -1,4 +1,4 @@
-import { DEFAULT_SETTINGS } from '../core';
+import { DEFAULT_SETTINGS, MISSING_POLICIES, parseSymbolizeSpec } from '../core';
 import type { AnalysisSettings, EntropyUnit, InputFormat, ReaderOptions } from '../core';
 import { UsageError } from './usageError';
 
@@ -11,6 +11,8 @@ export const READ_OPTIONS = {
   'keep-whitespace': { type: 'boolean' },
   'fasta-records': { type: 'string' },
   ambiguity: { type: 'string' },
+  symbolize: { type: 'string' },
+  missing: { type: 'string' },
 } as const;
 
 /** Options of the analysis itself. */
@@ -22,7 +24,7 @@ export const ANALYSIS_OPTIONS = {
   'max-censored': { type: 'string' },
 } as const;
 
-const FORMATS: readonly InputFormat[] = ['chars', 'tokens', 'fasta', 'csv', 'bytes'];
+const FORMATS: readonly InputFormat[] = ['chars', 'tokens', 'fasta', 'csv', 'bytes', 'numbers'];
 
 type Values = Record<string, string | boolean | undefined>;
 
@@ -45,8 +47,11 @@ export const isPositiveInteger = (x: number): boolean => Number.isInteger(x) && 
 
 /** Reader options from the command line; the format falls back to `guessed`. */
 export function readerOptionsFrom(values: Values, guessed: InputFormat): ReaderOptions {
-  const format = values.format === undefined ? guessed : oneOf(String(values.format), FORMATS, 'format');
+  // With --symbolize and no --format: a CSV file by its guess, anything else one number per line.
+  const fallback = values.symbolize !== undefined ? (guessed === 'csv' ? 'csv' : 'numbers') : guessed;
+  const format = values.format === undefined ? fallback : oneOf(String(values.format), FORMATS, 'format');
   const options: ReaderOptions = { format };
+  symbolizeOptions(values, options);
   if (values.column !== undefined) {
     const c = String(values.column);
     options.column = /^\d+$/.test(c) ? Number(c) : c;
@@ -71,4 +76,22 @@ export function settingsFrom(values: Values): AnalysisSettings {
   const confidence = numberOption(values, 'confidence', (x) => x > 0 && x < 1, 'a probability strictly between 0 and 1') ?? DEFAULT_SETTINGS.confidence;
   const maxCensored = numberOption(values, 'max-censored', (x) => x > 0 && x < 1, 'a fraction strictly between 0 and 1') ?? DEFAULT_SETTINGS.maxCensoredFraction;
   return { ...DEFAULT_SETTINGS, maxN, unit, intervalSeconds: interval, confidence, maxCensoredFraction: maxCensored };
+}
+
+/** --symbolize SPEC and --missing skip|split: numbers in, symbols out (format numbers or csv). */
+function symbolizeOptions(values: Values, options: ReaderOptions): void {
+  if (values.symbolize === undefined) {
+    if (options.format === 'numbers') throw new UsageError('--format numbers needs --symbolize quantile:K | threshold:T1,T2,... | ordinal:D[:TAU]');
+    if (values.missing !== undefined) throw new UsageError('--missing applies to a real-valued series: give --symbolize too');
+    return;
+  }
+  if (options.format !== 'numbers' && options.format !== 'csv') {
+    throw new UsageError(`--symbolize reads numbers: use --format numbers (one per line) or --format csv --column C, not ${options.format}`);
+  }
+  try {
+    options.symbolize = parseSymbolizeSpec(String(values.symbolize));
+  } catch (e) {
+    throw new UsageError(`--symbolize: ${e instanceof Error ? e.message : String(e)}`);
+  }
+  if (values.missing !== undefined) options.missing = oneOf(String(values.missing), MISSING_POLICIES, 'missing');
 }

@@ -17,6 +17,8 @@ export async function returnsCommand(file: string | undefined, values: Values, i
   const n = numberOption(values, 'n', isPositiveInteger, 'a whole number of at least 1');
   if (n === undefined) throw new UsageError('returns needs --n N, the block length');
   const options = readerOptionsFrom(values, values.format === undefined ? await guessFileFormat(file) : 'chars');
+  // One table of returns would let blocks cross the cuts between segments.
+  if (options.missing === 'split') throw new UsageError('returns reads one sequence: use --missing skip (or analyze, which takes the segments apart)');
   const { sequence } = await readInputFile(file, options);
   const N = sequence.symbols.length;
   if (n > N) throw new RangeError(`--n ${n} is longer than the sequence (${N} symbols)`);

@@ -23,14 +23,23 @@ usage
   returnrate generate SOURCE --length L [--seed S] [--out PATH]
 
 reading options
-  -f, --format chars|tokens|fasta|csv|bytes   default: by extension, else tokens when fields are
-                                              longer than one character, else chars
+  -f, --format chars|tokens|fasta|csv|bytes|numbers   default: by extension, else tokens when
+                             fields are longer than one character, else chars (numbers: one real
+                             number per line; needs --symbolize)
   -c, --column NAME|INDEX    CSV column, by header name or 0-based index
       --delimiter C          CSV delimiter (default: detected; "tab" for a tab)
       --no-header            CSV has no header row
       --keep-whitespace      chars: spaces and tabs are symbols too
       --fasta-records concatenate|separate
       --ambiguity skip|symbol|error   FASTA ambiguity codes (N, R, Y, ...) and gaps
+      --symbolize quantile:K | threshold:T1,T2,... | ordinal:D[:TAU]
+                             read real numbers (--format numbers, or csv --column C) and turn them
+                             into symbols: K cells of equal mass, cells cut at T1 < T2 < ... (a
+                             value equal to a cut goes up), or ordinal patterns of order D (2..8)
+                             with delay TAU (default 1); without --format: csv for a .csv file,
+                             else numbers
+      --missing skip|split   empty cells, NaN and NA: drop them (default), or cut the series there
+                             and analyse the segments apart
 
 analysis options
   -n, --max-n N              largest block length (default 40)

@@ -1,4 +1,5 @@
 import type { AnalysisResult, LengthRow, SymbolCount } from '../core';
+import { symbolizationText } from '../figures/symbolizationText';
 
 const fmt = (x: number | null | undefined, digits = 4): string => (x === null || x === undefined || !Number.isFinite(x) ? '-' : x.toFixed(digits));
 const interval = (ci: readonly [number, number] | null | undefined, digits = 4): string => (ci ? `[${fmt(ci[0], digits)}, ${fmt(ci[1], digits)}]` : '');
@@ -11,6 +12,7 @@ export function summaryText(result: AnalysisResult, options: { table: boolean })
   const level = Math.round(settings.confidence * 100);
   lines.push(`returnrate ${result.program.version}: ${input.name}`);
   lines.push(`  ${input.symbols.toLocaleString('en-US')} symbols, alphabet of ${input.alphabetSize}, read as ${input.format}${input.sha256 ? `, sha256 ${input.sha256.slice(0, 16)}...` : ''}`);
+  if (input.symbolization !== undefined) lines.push(`  symbolized ${symbolizationText(input.symbolization)}`);
   if (input.alphabet !== undefined) lines.push(`  alphabet (symbol count): ${alphabetText(input.alphabet, input.alphabetSize)}`);
   lines.push('');
   lines.push(`entropy rate   h = ${fmt(entropy.estimate)} ${unit}   ${level}% interval ${interval(entropy.ci95)}`);

@@ -15,6 +15,25 @@ export { recordSequences } from './sequence/recordSequences';
 export { previewHead, PREVIEW_BYTES, PREVIEW_LINES, PREVIEW_LINE_CHARS, PREVIEW_SYMBOLS_LISTED } from './sequence/previewHead';
 export type { HeadPreview, PreviewIssue, PreviewOptions } from './sequence/previewHead';
 
+// Real-valued series turned into symbols
+export { parseSymbolizeSpec, formatSymbolizeSpec, SYMBOLIZE_SPEC_FORMS } from './symbolize/symbolizeSpec';
+export type { SymbolizeSpec } from './symbolize/symbolizeSpec';
+export { MISSING_POLICIES } from './symbolize/missingPolicy';
+export type { MissingPolicy } from './symbolize/missingPolicy';
+export type { SymbolizationRecord } from './symbolize/symbolizationRecord';
+export { createNumericReader, readNumericSeries } from './symbolize/numericSeriesReader';
+export type { NumericSeriesReader } from './symbolize/numericSeriesReader';
+export type { NumericSeries } from './symbolize/seriesCollector';
+export { symbolizeSeries } from './symbolize/symbolizeSeries';
+export type { SymbolizedSeries } from './symbolize/symbolizeSeries';
+export { symbolizationSummary } from './symbolize/symbolizationSummary';
+export { longestSegment } from './symbolize/longestSegment';
+export type { SymbolizationSummary, SummaryOptions } from './symbolize/symbolizationSummary';
+export { valueHistogram } from './symbolize/valueHistogram';
+export type { ValueHistogram } from './symbolize/valueHistogram';
+export { downsampleMinMax } from './symbolize/downsampleMinMax';
+export type { DownsampledSeries } from './symbolize/downsampleMinMax';
+
 // The return-time engine
 export { scanReturns, ScanCancelled } from './returns/scanReturns';
 export type { ScanOptions } from './returns/scanReturns';

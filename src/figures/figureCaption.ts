@@ -1,4 +1,5 @@
 import type { AnalysisResult } from '../core';
+import { symbolizationText } from './symbolizationText';
 
 /** Where a figure's numbers came from, printed under an exported figure and atop its CSV. */
 export interface FigureCaption {
@@ -19,6 +20,7 @@ export function figureCaption(result: Pick<AnalysisResult, 'input' | 'settings' 
   const s = result.settings;
   const parts = [`max n ${s.maxN}`, `unit ${s.unit}`, `confidence ${s.confidence}`, `max censored fraction ${s.maxCensoredFraction}`];
   if (s.intervalSeconds !== null) parts.push(`interval ${s.intervalSeconds} s/symbol`);
+  if (result.input.symbolization !== undefined) parts.push(`symbolized ${symbolizationText(result.input.symbolization)}`);
   return {
     inputName: result.input.name,
     sha256: result.input.sha256,

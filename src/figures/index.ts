@@ -35,3 +35,5 @@ export { reportHtml, looksPhysiological } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
 export { calibrationFigure, CALIBRATION_STYLES } from './calibrationFigure';
 export type { CalibratedQuantity } from './calibrationFigure';
+export { symbolizationSeriesFigure, symbolizationHistogramFigure, SYMBOLIZATION_STYLES } from './symbolizationFigures';
+export { symbolizationText, symbolizationMethod } from './symbolizationText';

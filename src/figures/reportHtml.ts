@@ -1,6 +1,7 @@
 import type { AlternativeEstimate, AnalysisResult } from '../core';
 import { DEFAULT_EXPORT_VIEW, exportFigures, type ExportViewOptions } from './exportFigures';
 import { figureSvg } from './figureSvg';
+import { symbolizationMethod, symbolizationText } from './symbolizationText';
 import { xmlText } from './xmlText';
 
 export interface ReportOptions {
@@ -155,6 +156,7 @@ function settingsSection(result: AnalysisResult): string {
     ['Batches for the intervals', `${result.scan.intervalBatches} (batch length ${result.scan.batchLength}, ${result.scan.batchCount} fine batches)`],
     ['Match-length window', String(result.scan.matchWindow)],
   ];
+  if (result.input.symbolization !== undefined) facts.push(['Symbolization', symbolizationText(result.input.symbolization)]);
   return `<section id="settings"><h2>Settings</h2><dl class="facts">${facts.map(([k, v]) => `<dt>${xmlText(k)}</dt><dd>${xmlText(v)}</dd>`).join('')}</dl></section>`;
 }
 
@@ -202,7 +204,8 @@ const METHODS = [
 
 function methodsSection(result: AnalysisResult): string {
   const headline = `This report's headline uses the method "${result.entropy.method}" over ${lengthsText(result.entropy.lengthsUsed)}.`;
-  return `<section id="methods"><h2>Methods</h2><p>${METHODS.map(xmlText).join(' ')} ${xmlText(headline)}</p></section>`;
+  const symbolized = result.input.symbolization === undefined ? '' : ` ${xmlText(symbolizationMethod(result.input.symbolization))}`;
+  return `<section id="methods"><h2>Methods</h2><p>${METHODS.map(xmlText).join(' ')} ${xmlText(headline)}${symbolized}</p></section>`;
 }
 
 function cautionsSection(physiological: boolean): string {

@@ -123,3 +123,14 @@ describe('reportHtml', () => {
     expect(reportHtml(result)).not.toContain(DATE);
   });
 });
+
+describe('reportHtml with a symbolized input', () => {
+  it('lists the symbolization among the settings and cites its method', () => {
+    const symbolization = { spec: 'ordinal:3:1', cutPoints: [], cells: [{ label: '012', count: 5 }], values: 7, missing: 2, missingPolicy: 'skip' as const, segments: 1, segmentsDropped: 0 };
+    const html = reportHtml({ ...result, input: { ...result.input, symbolization } }, { date: DATE });
+    const doc = parse(html);
+    expect(byId(doc, 'settings').textContent).toContain('Symbolizationordinal:3:1; 2 missing values skipped');
+    expect(byId(doc, 'methods').textContent).toContain('Bandt & Pompe, Phys. Rev. Lett. 88 (2002) 174102');
+    expect(reportHtml(result, { date: DATE })).not.toContain('Symbolization');
+  });
+});

@@ -3,6 +3,7 @@
  * command line (`--json`) and saved sessions. Add fields freely; never rename the ones here.
  */
 import type { SymbolCount } from './alphabetSummary';
+import type { SymbolizationRecord } from '../symbolize/symbolizationRecord';
 
 export const ANALYSIS_SCHEMA = 'returnrate.analysis/1';
 /** Several analyses of one input (e.g. one per FASTA record): { schema, records: AnalysisResult[] }. */
@@ -44,6 +45,8 @@ export interface InputSummary {
   readonly alphabet?: readonly SymbolCount[];
   /** Symbols of the alphabet not listed in `alphabet`. */
   readonly alphabetUnlisted?: number;
+  /** Present when the input was a real-valued series turned into symbols (src/core/symbolize). */
+  readonly symbolization?: SymbolizationRecord;
 }
 
 /** One row of the per-n table; log R in nats, entropies in the output unit. */

@@ -52,6 +52,12 @@ export class CsvColumnReader extends TextReader {
   private blankLines = 0;
   private scanPos = 0;
   private scanInQuotes = false;
+  /** Subclasses that report positions per cell set this; the base class then records where each cell of the column starts. */
+  protected readonly trackCellStart: boolean = false;
+  /** Line, column (code points, 1-based) and byte (0-based) where the current cell of the column starts (when tracked). */
+  protected cellLine = 0;
+  protected cellColumn = 0;
+  protected cellByte = 0;
 
   constructor(options: ReaderOptions) {
     // A non-empty cell takes one byte and needs a delimiter or line break after it.
@@ -118,6 +124,11 @@ export class CsvColumnReader extends TextReader {
       const cp = cps[k];
       let state = this.state;
       if (state === FIELD_START) {
+        if (this.trackCellStart && this.collecting) {
+          this.cellLine = this.line;
+          this.cellColumn = base + k - this.lineStartCp + 1;
+          this.cellByte = this.byteOffsetAt(k);
+        }
         if (cp === QUOTE) {
           this.state = QUOTED;
           this.rowHasContent = true;
@@ -220,7 +231,11 @@ export class CsvColumnReader extends TextReader {
   }
 
   private takeCell(): void {
-    const text = this.cell.text().trim();
+    this.takeCellText(this.cell.text().trim());
+  }
+
+  /** One cell of the column, trimmed: a symbol, or an empty cell skipped. Subclasses may read cells otherwise. */
+  protected takeCellText(text: string): void {
     if (text === '') {
       if (this.emptyCells++ === 0) this.firstEmptyLine = this.rowStartLine;
       return;

@@ -4,6 +4,8 @@ import { guessFormat } from './guessFormat';
 import { ReadError } from './readError';
 import { readAll, type InputFormat, type ReaderOptions } from './sequenceReader';
 import { Utf8Decoder } from './utf8Decoder';
+import { readNumericSeries } from '../symbolize/numericSeriesReader';
+import { symbolizationSummary, type SymbolizationSummary } from '../symbolize/symbolizationSummary';
 
 /** Bytes of a file's start the preview reads: enough for guessFormat and a fair look at the alphabet. */
 export const PREVIEW_BYTES = 1 << 16;
@@ -46,6 +48,8 @@ export interface HeadPreview {
   readonly alphabet: readonly SymbolCount[];
   readonly alphabetSize: number;
   readonly issues: readonly PreviewIssue[];
+  /** With options.symbolize: the head's values, histogram, cut points and cell counts (absent when unread). */
+  readonly symbolization?: SymbolizationSummary;
 }
 
 const LINE_FEED = 0x0a;
@@ -110,7 +114,9 @@ export function previewHead(head: Uint8Array, fileBytes: number, fileName: strin
   const usable = wholeFile ? window : completeLines(window);
   const text = decodeText(usable);
   const guessedFormat = guessFormat(fileName, text);
-  const format = options.format === 'auto' ? guessedFormat : options.format;
+  // A symbolization reads numbers: 'auto' then means a CSV column for a CSV file, else one number per line.
+  const autoFormat = options.symbolize === undefined ? guessedFormat : guessedFormat === 'csv' ? 'csv' : 'numbers';
+  const format = options.format === 'auto' ? autoFormat : options.format;
   const issues: PreviewIssue[] = [];
   const readBytes = format === 'bytes' ? window : usable;
 
@@ -128,12 +134,16 @@ export function previewHead(head: Uint8Array, fileBytes: number, fileName: strin
   let symbolsInHead: number | null = null;
   let alphabet: SymbolCount[] = [];
   let alphabetSize = 0;
+  let symbolization: SymbolizationSummary | undefined;
   try {
     const read = readAll(readBytes, readerOptions(format, options));
     symbolsInHead = read.sequence.symbols.length;
     alphabetSize = read.sequence.alphabet.length;
     alphabet = alphabetSummary(read.sequence, PREVIEW_SYMBOLS_LISTED).symbols;
     for (const w of read.warnings) issues.push({ code: 'reader-warning', message: w.message });
+    if (options.symbolize !== undefined) {
+      symbolization = symbolizationSummary(readNumericSeries(readBytes, readerOptions(format, options)).series, options.symbolize);
+    }
     if (alphabetSize === 1) {
       issues.push({ code: 'one-symbol', message: `only one symbol ('${alphabet[0]?.symbol ?? ''}') ${wholeFile ? 'in the file' : 'in the head'}: its entropy rate is 0` });
     }
@@ -159,5 +169,6 @@ export function previewHead(head: Uint8Array, fileBytes: number, fileName: strin
     alphabet,
     alphabetSize,
     issues,
+    ...(symbolization === undefined ? {} : { symbolization }),
   };
 }

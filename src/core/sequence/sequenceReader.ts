@@ -5,8 +5,13 @@ import { CharsReader } from './charsReader';
 import { CsvColumnReader } from './csvColumnReader';
 import { FastaReader } from './fastaReader';
 import { TokensReader } from './tokensReader';
+import type { MissingPolicy } from '../symbolize/missingPolicy';
+import type { SymbolizationRecord } from '../symbolize/symbolizationRecord';
+import type { SymbolizeSpec } from '../symbolize/symbolizeSpec';
+import { createSymbolizingReader } from '../symbolize/symbolizingReader';
 
-export type InputFormat = 'chars' | 'tokens' | 'fasta' | 'csv' | 'bytes';
+/** 'numbers' is one real number per line; it needs `symbolize` (as does a CSV column of numbers). */
+export type InputFormat = 'chars' | 'tokens' | 'fasta' | 'csv' | 'bytes' | 'numbers';
 
 /**
  * How to turn a file's bytes into symbols. Text formats expect UTF-8 (a leading byte order mark is
@@ -39,6 +44,11 @@ export interface ReaderOptions {
   sizeHint?: number;
   /** Refuse inputs with more symbols than this ('too-many-symbols'). Default: no limit. */
   maxSymbols?: number;
+  /** numbers, csv: read the input as real numbers and turn them into symbols this way
+   * (src/core/symbolize). Without it, 'csv' cells are symbols as written. */
+  symbolize?: SymbolizeSpec;
+  /** With `symbolize`: what to do with missing values (empty cells, NaN, NA). Default 'skip'. */
+  missing?: MissingPolicy;
 }
 
 export interface FastaRecord {
@@ -56,7 +66,8 @@ export interface ReadWarning {
 }
 
 export interface ReadResult {
-  /** Symbol ids are assigned in order of first appearance: the first symbol read is id 0. */
+  /** Symbol ids are assigned in order of first appearance: the first symbol read is id 0 (a
+   * symbolized series instead numbers its cells in cell order, see src/core/symbolize). */
   sequence: Sequence;
   /** fasta only: one entry per record, in file order. */
   records?: FastaRecord[];
@@ -66,6 +77,8 @@ export interface ReadResult {
   lines: number;
   /** Counts the format reports, e.g. fasta 'ambiguity:N', 'gaps'; csv 'rows', 'emptyCells'. */
   details: Record<string, number>;
+  /** With `symbolize`: how the numbers became symbols (cut points, cells, missing values, segments). */
+  symbolization?: SymbolizationRecord;
 }
 
 /**
@@ -79,12 +92,21 @@ export interface SequenceReader {
   finish(): ReadResult;
 }
 
-const FORMATS: readonly InputFormat[] = ['chars', 'tokens', 'fasta', 'csv', 'bytes'];
+const FORMATS: readonly InputFormat[] = ['chars', 'tokens', 'fasta', 'csv', 'bytes', 'numbers'];
 
 /** A reader for one input in the given format; throws ReadError 'bad-option' for invalid options. */
 export function createReader(options: ReaderOptions): SequenceReader {
   checkCommonOptions(options);
+  const { symbolize } = options;
+  if (symbolize !== undefined) {
+    if (options.format !== 'numbers' && options.format !== 'csv') {
+      throw new ReadError('bad-option', `symbolization reads numbers: use format 'numbers' (one per line) or 'csv' (one column), not '${options.format}'`);
+    }
+    return createSymbolizingReader({ ...options, symbolize });
+  }
   switch (options.format) {
+    case 'numbers':
+      throw new ReadError('bad-option', `format 'numbers' needs a symbolization (quantile:K, threshold:T1,T2,... or ordinal:D[:TAU])`);
     case 'chars':
       return new CharsReader(options);
     case 'tokens':

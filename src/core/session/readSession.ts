@@ -170,6 +170,17 @@ function input(value: unknown, path: string): void {
   const sha = i['sha256'];
   if (sha !== null && (typeof sha !== 'string' || !SHA256_HEX.test(sha))) invalid(`${path}.sha256`, '64 lower-case hex digits or null', sha);
   if (i['alphabet'] !== undefined) array(i['alphabet'], `${path}.alphabet`);
+  if (i['symbolization'] !== undefined) symbolization(i['symbolization'], `${path}.symbolization`);
+}
+
+/** The optional record of a real-valued input turned into symbols (the fields reports and captions print). */
+function symbolization(value: unknown, path: string): void {
+  const s = object(value, path);
+  str(s, 'spec', path);
+  numbersOrNull(s['cutPoints'], `${path}.cutPoints`);
+  array(s['cells'], `${path}.cells`);
+  for (const key of ['values', 'missing', 'segments']) num(s, key, path);
+  if (s['missingPolicy'] !== 'skip' && s['missingPolicy'] !== 'split') invalid(`${path}.missingPolicy`, '"skip" or "split"', s['missingPolicy']);
 }
 
 function result(value: unknown, path: string): void {

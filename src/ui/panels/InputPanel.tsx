@@ -1,9 +1,11 @@
 import { useEffect, useState } from 'react';
 import type { DragEvent } from 'react';
 import { runner } from '../runner';
-import type { AmbiguityChoice, FormatChoice, ReadingChoices } from '../store/inputSlice';
+import type { MissingPolicy } from '../../core';
+import { SYMBOLIZE_DEFAULT_PARAMETER } from '../store/inputSlice';
+import type { AmbiguityChoice, FormatChoice, ReadingChoices, SymbolizeKind } from '../store/inputSlice';
 import { updateReading, useAppState } from '../store/store';
-import { AMBIGUITY_CHOICES, FORMAT_CHOICES } from '../view/inputOptions';
+import { AMBIGUITY_CHOICES, FORMAT_CHOICES, MISSING_CHOICES, SYMBOLIZE_CHOICES } from '../view/inputOptions';
 
 function openFirst(files: FileList | null | undefined): void {
   const file = files?.[0];
@@ -110,6 +112,8 @@ export function InputPanel() {
           CSV column: a header name, or a 0-based index.
         </p>
       )}
+      {/* Under 'auto' a file of numbers looks like tokens until a symbolization is chosen, so the choice is always offered there. */}
+      {(reading.format === 'auto' || shown === 'csv' || shown === 'numbers') && <SymbolizeFields reading={reading} />}
       <div className="check-row">
         {shown === 'csv' && (
           <label className="check">
@@ -147,5 +151,48 @@ export function InputPanel() {
         )}
       </div>
     </section>
+  );
+}
+
+/** How real numbers become symbols, and what happens to missing values (numbers and CSV input). */
+function SymbolizeFields({ reading }: { readonly reading: ReadingChoices }) {
+  const choice = SYMBOLIZE_CHOICES.find((c) => c.value === reading.symbolizeKind);
+  return (
+    <div className="field-row">
+      <label className="field">
+        <span>Symbolize numbers</span>
+        <select
+          value={reading.symbolizeKind}
+          onChange={(event) => {
+            const kind = event.currentTarget.value as SymbolizeKind;
+            changeReading({ symbolizeKind: kind, symbolizeParameter: SYMBOLIZE_DEFAULT_PARAMETER[kind] });
+          }}
+        >
+          {SYMBOLIZE_CHOICES.map((c) => (
+            <option key={c.value} value={c.value}>
+              {c.label}
+            </option>
+          ))}
+        </select>
+      </label>
+      {reading.symbolizeKind !== 'none' && (
+        <>
+          <label className="field">
+            <span>{choice?.parameter ?? 'Parameter'}</span>
+            <input type="text" value={reading.symbolizeParameter} onChange={(event) => changeReading({ symbolizeParameter: event.currentTarget.value })} />
+          </label>
+          <label className="field">
+            <span>Missing values</span>
+            <select value={reading.missing} onChange={(event) => changeReading({ missing: event.currentTarget.value as MissingPolicy })}>
+              {MISSING_CHOICES.map((c) => (
+                <option key={c.value} value={c.value}>
+                  {c.label}
+                </option>
+              ))}
+            </select>
+          </label>
+        </>
+      )}
+    </div>
   );
 }

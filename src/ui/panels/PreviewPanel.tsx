@@ -1,9 +1,11 @@
 import { useMemo } from 'react';
+import type { SymbolizationSummary } from '../../core';
 import { useAppState } from '../store/store';
 import { previewView } from '../view/previewView';
 import type { PreviewView } from '../view/previewView';
+import { SymbolizationPreview } from './SymbolizationPreview';
 
-function Ready({ view }: { readonly view: Extract<PreviewView, { kind: 'ready' }> }) {
+function Ready({ view, symbolization }: { readonly view: Extract<PreviewView, { kind: 'ready' }>; readonly symbolization: SymbolizationSummary | undefined }) {
   return (
     <>
       <p className="preview-format" data-testid="preview-format">
@@ -57,6 +59,7 @@ function Ready({ view }: { readonly view: Extract<PreviewView, { kind: 'ready' }
           )}
         </div>
       </div>
+      {symbolization !== undefined && <SymbolizationPreview summary={symbolization} scope={view.scope} />}
     </>
   );
 }
@@ -74,7 +77,7 @@ export function PreviewPanel() {
           {view.message}
         </p>
       ) : (
-        <Ready view={view} />
+        <Ready view={view} symbolization={preview?.kind === 'ready' ? preview.model.symbolization : undefined} />
       )}
     </section>
   );

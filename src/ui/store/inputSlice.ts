@@ -1,9 +1,11 @@
-import type { HeadPreview, InputFormat } from '../../core';
+import type { HeadPreview, InputFormat, MissingPolicy } from '../../core';
 import type { StoreHandle } from './store';
 
 /** 'auto' picks the reader from the file name and head (see guessFormat). */
 export type FormatChoice = InputFormat | 'auto';
 export type AmbiguityChoice = 'skip' | 'symbol' | 'error';
+/** How real numbers become symbols ('none': the file holds symbols already). */
+export type SymbolizeKind = 'none' | 'quantile' | 'threshold' | 'ordinal';
 
 /** How the page reads a file; survives a reload. Options of other formats are kept but not used. */
 export interface ReadingChoices {
@@ -18,6 +20,12 @@ export interface ReadingChoices {
   readonly ambiguity: AmbiguityChoice;
   /** FASTA: fold lower case (soft-masked bases) to upper case. */
   readonly caseFold: boolean;
+  /** Numbers (one per line) or a CSV column of numbers: how they become symbols. */
+  readonly symbolizeKind: SymbolizeKind;
+  /** The symbolization's parameter as typed: K (quantile), T1,T2,... (threshold), D or D:TAU (ordinal). */
+  readonly symbolizeParameter: string;
+  /** Missing values of a real-valued series: drop them, or cut the series there. */
+  readonly missing: MissingPolicy;
 }
 
 /** What the next run reads: a file (kept by the runner, only its name here) or a generated demo. */
@@ -50,7 +58,13 @@ export const DEFAULT_READING: ReadingChoices = {
   keepWhitespace: false,
   ambiguity: 'skip',
   caseFold: true,
+  symbolizeKind: 'none',
+  symbolizeParameter: '4',
+  missing: 'skip',
 };
+
+/** The parameter a symbolization starts with when it is chosen. */
+export const SYMBOLIZE_DEFAULT_PARAMETER: Readonly<Record<SymbolizeKind, string>> = { none: '', quantile: '4', threshold: '0', ordinal: '3' };
 
 export const initialInputState: InputState = {
   reading: DEFAULT_READING,
@@ -59,7 +73,8 @@ export const initialInputState: InputState = {
   preview: null,
 };
 
-const FORMAT_VALUES: readonly FormatChoice[] = ['auto', 'chars', 'tokens', 'fasta', 'csv', 'bytes'];
+const FORMAT_VALUES: readonly FormatChoice[] = ['auto', 'chars', 'tokens', 'fasta', 'csv', 'bytes', 'numbers'];
+const SYMBOLIZE_KINDS: readonly SymbolizeKind[] = ['none', 'quantile', 'threshold', 'ordinal'];
 const AMBIGUITY_VALUES: readonly AmbiguityChoice[] = ['skip', 'symbol', 'error'];
 
 function isDemoLength(length: unknown): length is number {
@@ -79,6 +94,9 @@ export function restoreReading(stored: unknown): ReadingChoices {
     keepWhitespace: bool('keepWhitespace'),
     ambiguity: AMBIGUITY_VALUES.includes(s['ambiguity'] as AmbiguityChoice) ? (s['ambiguity'] as AmbiguityChoice) : DEFAULT_READING.ambiguity,
     caseFold: bool('caseFold'),
+    symbolizeKind: SYMBOLIZE_KINDS.includes(s['symbolizeKind'] as SymbolizeKind) ? (s['symbolizeKind'] as SymbolizeKind) : DEFAULT_READING.symbolizeKind,
+    symbolizeParameter: typeof s['symbolizeParameter'] === 'string' ? s['symbolizeParameter'] : DEFAULT_READING.symbolizeParameter,
+    missing: s['missing'] === 'split' ? 'split' : 'skip',
   };
 }
 

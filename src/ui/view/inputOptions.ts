@@ -1,7 +1,7 @@
-import { guessFormat } from '../../core';
-import type { PreviewOptions, ReaderOptions } from '../../core';
+import { guessFormat, parseSymbolizeSpec } from '../../core';
+import type { MissingPolicy, PreviewOptions, ReaderOptions, SymbolizeSpec } from '../../core';
 import { DEMO_LENGTH_RANGE } from '../store/inputSlice';
-import type { AmbiguityChoice, ChosenInput, FormatChoice, ReadingChoices } from '../store/inputSlice';
+import type { AmbiguityChoice, ChosenInput, FormatChoice, ReadingChoices, SymbolizeKind } from '../store/inputSlice';
 import { formatBytes, formatCount } from './format';
 
 /** The formats offered in the page, with their labels. */
@@ -12,7 +12,37 @@ export const FORMAT_CHOICES: readonly { readonly value: FormatChoice; readonly l
   { value: 'fasta', label: 'FASTA' },
   { value: 'csv', label: 'CSV (one column)' },
   { value: 'bytes', label: 'Raw bytes' },
+  { value: 'numbers', label: 'Numbers (one per line)' },
 ];
+
+/** Ways to turn real numbers into symbols, with labels and what their parameter means. */
+export const SYMBOLIZE_CHOICES: readonly { readonly value: SymbolizeKind; readonly label: string; readonly parameter: string }[] = [
+  { value: 'none', label: 'None (the file holds symbols)', parameter: '' },
+  { value: 'quantile', label: 'Quantile cells', parameter: 'Cells K' },
+  { value: 'threshold', label: 'Thresholds', parameter: 'Cut points T1,T2,…' },
+  { value: 'ordinal', label: 'Ordinal patterns', parameter: 'Order D or D:TAU' },
+];
+
+/** What to do with missing values (empty, NaN, NA), with labels. */
+export const MISSING_CHOICES: readonly { readonly value: MissingPolicy; readonly label: string }[] = [
+  { value: 'skip', label: 'Skip them (join the values around)' },
+  { value: 'split', label: 'Split the series there' },
+];
+
+/**
+ * The symbolization the choices ask for: null for 'none'.
+ * @throws RangeError with the parser's message for a bad parameter
+ */
+export function symbolizeSpecOf(c: Pick<ReadingChoices, 'symbolizeKind' | 'symbolizeParameter'>): SymbolizeSpec | null {
+  if (c.symbolizeKind === 'none') return null;
+  return parseSymbolizeSpec(`${c.symbolizeKind}:${c.symbolizeParameter}`);
+}
+
+/** Symbolization options for a reader (empty when none is chosen). */
+function symbolizeOptions(c: ReadingChoices): { symbolize?: SymbolizeSpec; missing?: MissingPolicy } {
+  const symbolize = symbolizeSpecOf(c);
+  return symbolize === null ? {} : { symbolize, missing: c.missing };
+}
 
 /** What a FASTA reader does with ambiguity codes and gaps, with labels. */
 export const AMBIGUITY_CHOICES: readonly { readonly value: AmbiguityChoice; readonly label: string }[] = [
@@ -33,8 +63,11 @@ function optionsFor<F extends FormatChoice>(format: F, c: ReadingChoices): Omit<
   switch (format) {
     case 'csv': {
       const column = parseColumn(c.csvColumn);
-      return column === undefined ? { format, hasHeader: c.csvHeader } : { format, column, hasHeader: c.csvHeader };
+      const symbolize = symbolizeOptions(c);
+      return column === undefined ? { format, hasHeader: c.csvHeader, ...symbolize } : { format, column, hasHeader: c.csvHeader, ...symbolize };
     }
+    case 'numbers':
+      return { format, ...symbolizeOptions(c) };
     case 'chars':
       return { format, keepWhitespace: c.keepWhitespace };
     case 'fasta':
@@ -46,7 +79,10 @@ function optionsFor<F extends FormatChoice>(format: F, c: ReadingChoices): Omit<
 
 /** Reader options for a file from the page's choices; `head` is the file's decoded start (see guessFormat). */
 export function readerOptionsFor(fileName: string, head: string, c: ReadingChoices): ReaderOptions {
-  return optionsFor(c.format === 'auto' ? guessFormat(fileName, head) : c.format, c);
+  if (c.format !== 'auto') return optionsFor(c.format, c);
+  const guessed = guessFormat(fileName, head);
+  // With a symbolization, 'auto' reads numbers: a CSV column for a CSV file, else one per line.
+  return optionsFor(c.symbolizeKind === 'none' ? guessed : guessed === 'csv' ? 'csv' : 'numbers', c);
 }
 
 /**
@@ -63,6 +99,7 @@ export function previewOptionsFor(c: ReadingChoices): PreviewOptions {
     ambiguity: c.ambiguity,
     caseFold: c.caseFold,
     ...(column === undefined ? {} : { column }),
+    ...symbolizeOptions(c),
   };
 }
 

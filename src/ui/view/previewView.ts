@@ -36,6 +36,7 @@ const FORMAT_NAMES: Readonly<Record<InputFormat, string>> = {
   fasta: 'FASTA',
   csv: 'CSV column',
   bytes: 'raw bytes',
+  numbers: 'numbers, one per line',
 };
 
 /** Names of the whitespace characters a symbol can be, for people. */

@@ -148,3 +148,21 @@ describe('readSession refuses bad files with a clear message', () => {
     }
   });
 });
+
+describe('session with a symbolized input', () => {
+  const symbolization = { spec: 'quantile:4', cutPoints: [0.5, 1, 2], cells: [{ label: 'q1', count: 3 }], values: 12, missing: 1, missingPolicy: 'skip', segments: 1, segmentsDropped: 0 };
+
+  it('keeps input.symbolization through a write and a read', () => {
+    const result = hostileResult();
+    const withSymbolization = { ...result, input: { ...result.input, symbolization: { ...symbolization, missingPolicy: 'skip' as const } } };
+    expect(readSession(writeSession(session(withSymbolization))).result.input.symbolization).toEqual(symbolization);
+  });
+
+  it('refuses a symbolization with an unknown missing-value policy, naming the field', () => {
+    const text = writeSession(session()).replace('"format": "tokens",', `"format": "tokens",\n"symbolization": ${JSON.stringify({ ...symbolization, missingPolicy: 'zero' })},`);
+    const error = errorOf(text);
+    expect(error.code).toBe('invalid-field');
+    expect(error.message).toContain('result.input.symbolization.missingPolicy');
+  });
+});
+
