@@ -87,3 +87,10 @@ export { writeSession } from './session/writeSession';
 export { readSession, looksLikeSession } from './session/readSession';
 export { SessionError } from './session/sessionError';
 export type { SessionErrorCode } from './session/sessionError';
+
+// Mixing diagnostics and information moments
+export { mixingDiagnostics } from './diagnostics/mixingDiagnostics';
+export type { DiagnosticsSummary, DiagnosticsOptions } from './diagnostics/mixingDiagnostics';
+export type { DecayFit } from './diagnostics/decayFits';
+export type { MixingReading, MixingVerdict } from './diagnostics/mixingReading';
+export type { InformationMoments } from './diagnostics/informationMoments';

@@ -6,8 +6,9 @@ export interface DecayFit {
   readonly kind: 'exponential' | 'power';
   /** beta(k) ~ C exp(-k / tau) or C k^-rate. */
   readonly C: number;
-  /** tau (exponential, in symbols) or the rate p (power law); Infinity / 0 when beta does not fall. */
-  readonly scale: number;
+  /** tau (exponential, in symbols) or the rate p (power law); null when beta does not fall (kept
+   * finite so the result survives JSON). */
+  readonly scale: number | null;
   /** Coefficient of determination of the line on the log scale. */
   readonly rSquared: number;
   /** Residual standard deviation of log beta (n - 2 degrees of freedom). */
@@ -74,7 +75,7 @@ function fit(kind: 'exponential' | 'power', gaps: readonly number[], beta: reado
     y.push(Math.log(beta[i]));
   }
   const l = line(x, y);
-  const scale = kind === 'exponential' ? (l.slope < 0 ? -1 / l.slope : Infinity) : Math.max(0, -l.slope);
+  const scale = l.slope < 0 ? (kind === 'exponential' ? -1 / l.slope : -l.slope) : null;
   return {
     kind,
     C: Math.exp(l.intercept),

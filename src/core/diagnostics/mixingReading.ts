@@ -54,7 +54,8 @@ export function mixingReading(f: MixingFacts): MixingReading {
   const n = f.blockLengthsUsed;
   const exp = f.exponential;
   const pow = f.power;
-  const powerBetter = pow !== null && (exp === null || pow.residualSd < PREFER_POWER * exp.residualSd);
+  const powerBetter = pow !== null && pow.scale !== null && (exp === null || pow.residualSd < PREFER_POWER * exp.residualSd);
+  const rate = pow?.scale ?? 0;
   const acf =
     f.acfOutside !== null && f.acfExpectedOutside !== null && f.acfOutside > 2 * f.acfExpectedOutside + 2
       ? ` The information increments are correlated (${f.acfOutside} lags outside the band, about ${f.acfExpectedOutside.toFixed(1)} expected by chance), so their long-run variance differs from the plain variance.`
@@ -67,13 +68,13 @@ export function mixingReading(f: MixingFacts): MixingReading {
   } else if (f.gapsAboveFloor === 0 && f.belowFloorFrom !== null) {
     verdict = 'fast';
     text = `No dependence between blocks of length ${f.blockLength} shows above the noise floor at any gap from ${f.gapRange[0]}: dependence decays fast enough for the Gaussian band at these n (up to ${n}).`;
-  } else if (powerBetter && pow.scale <= 1) {
+  } else if (powerBetter && rate <= 1) {
     verdict = 'too-slow';
-    text = `beta(k) falls like a power law k^-${pow.scale.toFixed(2)}, too slowly to be summable: too slow to trust the Gaussian band at these n.`;
+    text = `beta(k) falls like a power law k^-${rate.toFixed(2)}, too slowly to be summable: too slow to trust the Gaussian band at these n.`;
   } else if (f.belowFloorFrom !== null && f.belowFloorFrom <= n) {
     verdict = 'fast';
     text = `beta(k) falls below its noise floor by gap ${f.belowFloorFrom}, within the block lengths used (up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
-  } else if (!powerBetter && exp !== null && 3 * exp.scale <= n) {
+  } else if (!powerBetter && exp !== null && exp.scale !== null && 3 * exp.scale <= n) {
     verdict = 'fast';
     text = `beta(k) decays exponentially with tau = ${exp.scale.toFixed(2)} symbols, short against the block lengths used (up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
   } else if (exp === null && pow === null) {
@@ -82,7 +83,7 @@ export function mixingReading(f: MixingFacts): MixingReading {
   } else {
     verdict = 'slow';
     text = powerBetter
-      ? `beta(k) falls like a power law k^-${pow.scale.toFixed(2)}: summable but slow, so the Gaussian band is approached slowly at these n (up to ${n}); read its coverage with caution.`
+      ? `beta(k) falls like a power law k^-${rate.toFixed(2)}: summable but slow, so the Gaussian band is approached slowly at these n (up to ${n}); read its coverage with caution.`
       : `beta(k) still stands above its noise floor at gap ${f.belowFloorFrom ?? f.gapRange[1]}, beyond the block lengths used (up to ${n}): dependence decays slowly for these n; read the Gaussian band with caution.`;
   }
   return { verdict, text: text + acf, caveat: MIXING_CAVEAT };

@@ -3,6 +3,7 @@
  * command line (`--json`) and saved sessions. Add fields freely; never rename the ones here.
  */
 import type { SymbolCount } from './alphabetSummary';
+import type { DiagnosticsSummary } from '../diagnostics/mixingDiagnostics';
 
 export const ANALYSIS_SCHEMA = 'returnrate.analysis/1';
 /** Several analyses of one input (e.g. one per FASTA record): { schema, records: AnalysisResult[] }. */
@@ -183,4 +184,7 @@ export interface AnalysisResult {
     readonly intervalBatches: number;
     readonly matchWindow: number;
   };
+  /** Mixing diagnostics and one-symbol information moments (src/core/diagnostics); absent in results
+   * saved before they were added and in results built from a scan alone. */
+  readonly diagnostics?: DiagnosticsSummary;
 }
