@@ -30,6 +30,9 @@ export interface MixingFacts {
   readonly acfExpectedOutside: number | null;
 }
 
+/** Dependence that is gone within this many symbols counts as short-range even when n is smaller. */
+export const SHORT_RANGE_GAP = 10;
+
 /** The power law describes beta better when its residual SD on the log scale is this much smaller. */
 const PREFER_POWER = 0.8;
 
@@ -39,10 +42,10 @@ export const MIXING_CAVEAT =
 
 /**
  * The reading (our rule, stated):
- * - 'fast' when beta falls below its noise threshold within the block lengths the analysis uses
- *   (belowFloorFrom <= blockLengthsUsed), or the exponential fit is the better one and 3 tau is
- *   within them: by then the dependence is e^-3 of its start, so blocks that far apart are nearly
- *   independent;
+ * - 'fast' when beta falls below its noise threshold within the reach L = max(block lengths the
+ *   analysis uses, SHORT_RANGE_GAP) (belowFloorFrom <= L), or the exponential fit is the better one
+ *   and 3 tau <= L: by then the dependence is e^-3 of its start, so blocks that far apart are
+ *   nearly independent;
  * - 'too-slow' when the power law is the better fit with rate p <= 1: the coefficients are not
  *   summable, which the central limit theorems for dependent data need (Bradley, Probab. Surveys 2
  *   (2005), from memory), so the Gaussian band may fail at every n;
@@ -52,6 +55,7 @@ export const MIXING_CAVEAT =
  */
 export function mixingReading(f: MixingFacts): MixingReading {
   const n = f.blockLengthsUsed;
+  const reach = Math.max(n, SHORT_RANGE_GAP);
   const exp = f.exponential;
   const pow = f.power;
   const powerBetter = pow !== null && pow.scale !== null && (exp === null || pow.residualSd < PREFER_POWER * exp.residualSd);
@@ -71,13 +75,13 @@ export function mixingReading(f: MixingFacts): MixingReading {
   } else if (powerBetter && rate <= 1) {
     verdict = 'too-slow';
     text = `beta(k) falls like a power law k^-${rate.toFixed(2)}, too slowly to be summable: too slow to trust the Gaussian band at these n.`;
-  } else if (f.belowFloorFrom !== null && f.belowFloorFrom <= n) {
+  } else if (f.belowFloorFrom !== null && f.belowFloorFrom <= reach) {
     verdict = 'fast';
-    text = `beta(k) falls below its noise floor by gap ${f.belowFloorFrom}, within the block lengths used (up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
-  } else if (!powerBetter && exp !== null && exp.scale !== null && 3 * exp.scale <= n) {
+    text = `beta(k) falls below its noise floor by gap ${f.belowFloorFrom}, a short range (block lengths used up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
+  } else if (!powerBetter && exp !== null && exp.scale !== null && 3 * exp.scale <= reach) {
     verdict = 'fast';
-    text = `beta(k) decays exponentially with tau = ${exp.scale.toFixed(2)} symbols, short against the block lengths used (up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
-  } else if (exp === null && pow === null) {
+    text = `beta(k) decays exponentially with tau = ${exp.scale.toFixed(2)} symbols, a short range (block lengths used up to ${n}): dependence decays fast enough for the Gaussian band at these n.`;
+  } else if (exp === null && pow === null && f.belowFloorFrom === null) {
     verdict = 'unknown';
     text = `Too few gaps with beta(k) above its noise floor to fit a decay, yet it does not fall below the floor by gap ${f.gapRange[1]}: the decay cannot be judged from these data.`;
   } else {
