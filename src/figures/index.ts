@@ -33,3 +33,7 @@ export { exportCaption, exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, E
 export type { ExportFigureId, ExportedFigure, ExportViewOptions } from './exportFigures';
 export { reportHtml, looksPhysiological } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
+export { mixingFigure, decayValue, MIXING_STYLES } from './mixingFigure';
+export { autocorrelationFigure } from './autocorrelationFigure';
+export { exportDiagnosticFigures, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
+export type { DiagnosticFigureId, ExportedDiagnosticFigure } from './exportDiagnosticFigures';
