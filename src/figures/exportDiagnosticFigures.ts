@@ -15,12 +15,23 @@ export interface ExportedDiagnosticFigure {
   readonly caption: FigureCaption;
 }
 
-/** The diagnostics figures of a result with their captions (command line files, report, tests). */
+/** True for the ids of the diagnostics views (the export toolbar picks their caption with it). */
+export function isDiagnosticFigureId(id: string): id is DiagnosticFigureId {
+  return (DIAGNOSTIC_FIGURE_IDS as readonly string[]).includes(id);
+}
+
+/** The caption of one diagnostics view: the result's source and settings plus m or k. */
+export function diagnosticCaption(id: DiagnosticFigureId, result: AnalysisResult): FigureCaption {
+  const d = result.diagnostics;
+  if (id === 'mixing-beta') return figureCaption(result, d?.beta ? `block length m = ${d.beta.blockLength}` : '');
+  return figureCaption(result, d?.autocorrelation ? `k = ${d.autocorrelation.order}` : '');
+}
+
+/** The diagnostics figures of a result with their captions (command line files, tests). */
 export function exportDiagnosticFigures(result: AnalysisResult, size: FigureSize = EXPORT_SIZE): ExportedDiagnosticFigure[] {
   const d = result.diagnostics;
-  const m = d?.beta?.blockLength;
   return [
-    { id: 'mixing-beta', figure: mixingFigure(d, size), caption: figureCaption(result, m === undefined ? '' : `block length m = ${m}`) },
-    { id: 'information-acf', figure: autocorrelationFigure(d, size), caption: figureCaption(result, d?.autocorrelation ? `k = ${d.autocorrelation.order}` : '') },
+    { id: 'mixing-beta', figure: mixingFigure(d, size), caption: diagnosticCaption('mixing-beta', result) },
+    { id: 'information-acf', figure: autocorrelationFigure(d, size), caption: diagnosticCaption('information-acf', result) },
   ];
 }

@@ -35,5 +35,5 @@ export { reportHtml, looksPhysiological } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
 export { mixingFigure, decayValue, MIXING_STYLES } from './mixingFigure';
 export { autocorrelationFigure } from './autocorrelationFigure';
-export { exportDiagnosticFigures, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
+export { exportDiagnosticFigures, diagnosticCaption, isDiagnosticFigureId, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
 export type { DiagnosticFigureId, ExportedDiagnosticFigure } from './exportDiagnosticFigures';

@@ -1,5 +1,6 @@
 import { useEffect } from 'react';
 import { ConvergencePanel } from './panels/ConvergencePanel';
+import { DiagnosticsPanel } from './panels/DiagnosticsPanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
@@ -76,6 +77,7 @@ export function App() {
         <ErrorBoundary name="Return law figure">
           <ReturnLawPanel />
         </ErrorBoundary>
+        <ErrorBoundary name="Mixing diagnostics"><DiagnosticsPanel /></ErrorBoundary>
       </div>
       <footer className="app-footer">
         Demo data are invented. Estimates are research estimates, not a diagnosis; everything runs in this browser tab and no data leave it.
