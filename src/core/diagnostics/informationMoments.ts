@@ -4,6 +4,8 @@ import type { SymbolArray } from '../sequence/sequence';
 export const MOMENT_ORDER = 6;
 /** Batches of consecutive positions for the standard errors of the moments. */
 export const MOMENT_BATCHES = 32;
+/** Up to this alphabet size the batch sums come from per-batch symbol counts (cheaper per position). */
+const BATCH_COUNT_ALPHABET = 4096;
 /** The heavy-tail warning fires when the singleton tail carries more than this share of the variance. */
 export const TAIL_SHARE_LIMIT = 0.1;
 
@@ -79,13 +81,30 @@ export function informationMoments(symbols: SymbolArray, alphabetSize: number): 
   const batchLength = Math.floor(N / MOMENT_BATCHES);
   const used = batchLength * MOMENT_BATCHES;
   const batchMean = new Float64Array(MOMENT_BATCHES * MOMENT_ORDER);
-  for (let b = 0; b < MOMENT_BATCHES; b++) {
-    const base = b * MOMENT_ORDER;
-    for (let t = b * batchLength; t < (b + 1) * batchLength; t++) {
-      const at = symbols[t] * MOMENT_ORDER;
-      for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] += powers[at + r];
+  if (alphabetSize <= BATCH_COUNT_ALPHABET) {
+    // Small alphabets: count symbols per batch (one increment per position), then weight the powers.
+    const batchCounts = new Int32Array(MOMENT_BATCHES * alphabetSize);
+    for (let b = 0; b < MOMENT_BATCHES; b++) {
+      const base = b * alphabetSize;
+      for (let t = b * batchLength; t < (b + 1) * batchLength; t++) batchCounts[base + symbols[t]]++;
     }
-    for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] /= batchLength;
+    for (let b = 0; b < MOMENT_BATCHES; b++) {
+      for (let a = 0; a < alphabetSize; a++) {
+        const c = batchCounts[b * alphabetSize + a];
+        if (c === 0) continue;
+        for (let r = 0; r < MOMENT_ORDER; r++) batchMean[b * MOMENT_ORDER + r] += c * powers[a * MOMENT_ORDER + r];
+      }
+      for (let r = 0; r < MOMENT_ORDER; r++) batchMean[b * MOMENT_ORDER + r] /= batchLength;
+    }
+  } else {
+    for (let b = 0; b < MOMENT_BATCHES; b++) {
+      const base = b * MOMENT_ORDER;
+      for (let t = b * batchLength; t < (b + 1) * batchLength; t++) {
+        const at = symbols[t] * MOMENT_ORDER;
+        for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] += powers[at + r];
+      }
+      for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] /= batchLength;
+    }
   }
   const rawStandardError: number[] = [];
   for (let r = 0; r < MOMENT_ORDER; r++) {

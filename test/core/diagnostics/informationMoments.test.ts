@@ -118,4 +118,26 @@ describe('informationMoments', () => {
     const i1 = -Math.log(1 - p);
     expect(m?.raw[2]).toBeCloseTo(p * i0 ** 3 + (1 - p) * i1 ** 3, 12);
   });
+
+  test('batch-means standard errors agree with the i.i.d. formula on i.i.d. data, for small and large alphabets', () => {
+    // For independent positions the long-run variance of I^r is its plain variance, so the SE of the
+    // mean is sqrt((E[I^2r] - E[I^r]^2) / N) (common practice, no source). With 32 batches the
+    // batch-means SE has a relative error of about 1/sqrt(2 x 31) = 13%: allow 4 of those (50%).
+    for (const [A, N] of [
+      [3, 64_000],
+      [5000, 640_000],
+    ] as const) {
+      const law = new Array<number>(A).fill(0).map((_, i) => (i + 1) / ((A * (A + 1)) / 2));
+      const seq = iidSource(law).generate(N, 13);
+      const m = informationMoments(seq.symbols, A);
+      expect(m).not.toBeNull();
+      if (m === null) continue;
+      for (const r of [1, 2]) {
+        // E[I^2r] from the same plug-in law (raw moments up to 4 are reported).
+        const plainVar = (m.raw[2 * r - 1] ?? Number.NaN) - (m.raw[r - 1] ?? Number.NaN) ** 2;
+        const iidSe = Math.sqrt(plainVar / N);
+        expect(Math.abs((m.rawStandardError[r - 1] ?? Number.NaN) / iidSe - 1)).toBeLessThan(0.5);
+      }
+    }
+  });
 });
