@@ -79,9 +79,22 @@ function symbolClasses(symbols: SymbolArray, alphabetSize: number, kept: number)
   }
   const counts = new Float64Array(alphabetSize);
   for (let t = 0; t < symbols.length; t++) counts[symbols[t]]++;
-  const order = Array.from({ length: alphabetSize }, (_, a) => a).sort((a, b) => counts[b] - counts[a] || a - b);
+  // The kept - 1 most frequent symbols by insertion into a short sorted list (kept is at most a few
+  // dozen), not a sort of the whole alphabet, which may hold millions of tokens.
+  const top = kept - 1;
+  const order = new Int32Array(top).fill(-1);
+  for (let a = 0; a < alphabetSize; a++) {
+    const c = counts[a];
+    if (order[top - 1] >= 0 && c <= counts[order[top - 1]]) continue;
+    let j = top - 1;
+    while (j > 0 && (order[j - 1] < 0 || c > counts[order[j - 1]])) {
+      order[j] = order[j - 1];
+      j--;
+    }
+    order[j] = a;
+  }
   map.fill(kept - 1);
-  for (let r = 0; r < kept - 1; r++) map[order[r]] = r;
+  for (let r = 0; r < top; r++) if (order[r] >= 0) map[order[r]] = r;
   return map;
 }
 

@@ -58,8 +58,11 @@ export function informationMoments(symbols: SymbolArray, alphabetSize: number): 
   if (N < 2 * MOMENT_BATCHES) return null;
   const counts = new Float64Array(alphabetSize);
   for (let t = 0; t < N; t++) counts[symbols[t]]++;
-  // powers[a * MOMENT_ORDER + r] = I_a^(r+1), so the pass over positions only adds.
-  const powers = new Float64Array(alphabetSize * MOMENT_ORDER);
+  // info[a] = I_a; for small alphabets also powers[a * MOMENT_ORDER + r] = I_a^(r+1) (large ones
+  // would make that table 48 bytes per symbol).
+  const info = new Float64Array(alphabetSize);
+  const small = alphabetSize <= BATCH_COUNT_ALPHABET;
+  const powers = new Float64Array(small ? alphabetSize * MOMENT_ORDER : 0);
   const logN = Math.log(N);
   let f1 = 0;
   let f2 = 0;
@@ -70,10 +73,11 @@ export function informationMoments(symbols: SymbolArray, alphabetSize: number): 
     if (c === 1) f1++;
     else if (c === 2) f2++;
     const I = logN - Math.log(c);
+    info[a] = I;
     let power = 1;
     for (let r = 0; r < MOMENT_ORDER; r++) {
       power *= I;
-      powers[a * MOMENT_ORDER + r] = power;
+      if (small) powers[a * MOMENT_ORDER + r] = power;
       raw[r] += (c / N) * power;
     }
   }
@@ -81,7 +85,7 @@ export function informationMoments(symbols: SymbolArray, alphabetSize: number): 
   const batchLength = Math.floor(N / MOMENT_BATCHES);
   const used = batchLength * MOMENT_BATCHES;
   const batchMean = new Float64Array(MOMENT_BATCHES * MOMENT_ORDER);
-  if (alphabetSize <= BATCH_COUNT_ALPHABET) {
+  if (small) {
     // Small alphabets: count symbols per batch (one increment per position), then weight the powers.
     const batchCounts = new Int32Array(MOMENT_BATCHES * alphabetSize);
     for (let b = 0; b < MOMENT_BATCHES; b++) {
@@ -100,8 +104,12 @@ export function informationMoments(symbols: SymbolArray, alphabetSize: number): 
     for (let b = 0; b < MOMENT_BATCHES; b++) {
       const base = b * MOMENT_ORDER;
       for (let t = b * batchLength; t < (b + 1) * batchLength; t++) {
-        const at = symbols[t] * MOMENT_ORDER;
-        for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] += powers[at + r];
+        const I = info[symbols[t]];
+        let power = 1;
+        for (let r = 0; r < MOMENT_ORDER; r++) {
+          power *= I;
+          batchMean[base + r] += power;
+        }
       }
       for (let r = 0; r < MOMENT_ORDER; r++) batchMean[base + r] /= batchLength;
     }

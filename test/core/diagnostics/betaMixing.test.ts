@@ -4,52 +4,7 @@ import { iidSource } from '../../../src/core/sources/iidSource';
 import { markovSource } from '../../../src/core/sources/markovSource';
 import { renewalSource } from '../../../src/core/sources/renewalSource';
 
-type M2 = readonly [readonly [number, number], readonly [number, number]];
-
-/** k-step matrix of a 2x2 transition matrix by repeated multiplication. */
-function power2(P: M2, k: number): M2 {
-  let M: M2 = [
-    [1, 0],
-    [0, 1],
-  ];
-  for (let i = 0; i < k; i++) {
-    M = [
-      [M[0][0] * P[0][0] + M[0][1] * P[1][0], M[0][0] * P[0][1] + M[0][1] * P[1][1]],
-      [M[1][0] * P[0][0] + M[1][1] * P[1][0], M[1][0] * P[0][1] + M[1][1] * P[1][1]],
-    ];
-  }
-  return M;
-}
-
 describe('estimateBetaMixing', () => {
-  test('matches the exact beta(k) of a two-state chain at block length 1', () => {
-    // beta(k) = (1/2) sum_x sum_y pi_x |P^k_xy - pi_y|: the absolute-regularity coefficient of
-    // sigma(X_0) and sigma(X_k) (Bradley, Probab. Surveys 2 (2005) 107-144, section 2; for a Markov
-    // chain the past and future sigma-fields reduce to X_0 and X_k by the Markov property, from
-    // memory). Our gap k puts the second 1-block at t + k, so P^(k) is the k-step matrix.
-    const P: M2 = [
-      [0.9, 0.1],
-      [0.4, 0.6],
-    ];
-    const pi = [0.8, 0.2] as const; // THEORY.md section 2 [calc]
-    const gaps = [1, 2, 3, 4, 5, 6, 8, 10];
-    const seq = markovSource(P.map((row) => [...row])).generate(1_000_000, 2026);
-    const est = estimateBetaMixing(seq.symbols, 2, { blockLength: 1, gaps });
-    expect(est).not.toBeNull();
-    if (est === null) return;
-    expect(est.blockLength).toBe(1);
-    expect(est.stride).toBe(1);
-    gaps.forEach((k, i) => {
-      const Pk = power2(P, k);
-      let exact = 0;
-      for (const x of [0, 1] as const) for (const y of [0, 1] as const) exact += 0.5 * pi[x] * Math.abs(Pk[x][y] - pi[y]);
-      // The noise floor is sqrt(2/pi) times the standard deviation of the cell errors under
-      // independence; dependence between pairs of this chain inflates the variance by at most
-      // (1 + 0.5)/(1 - 0.5) = 3 (second eigenvalue 0.5). 6 floors = 4.8 sd = 2.8 inflated sd.
-      expect(Math.abs((est.beta[i] ?? Number.NaN) - exact)).toBeLessThan(6 * (est.noiseFloor[i] ?? Number.NaN));
-    });
-  });
-
   test('an i.i.d. source stays at its noise floor at every gap', () => {
     const seq = iidSource([0.5, 0.3, 0.2]).generate(300_000, 11);
     const est = estimateBetaMixing(seq.symbols, 3);
