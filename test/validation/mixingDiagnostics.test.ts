@@ -32,8 +32,9 @@ function gk(x: number): number {
 
 /**
  * E[(-log p(a_1))^r] under the Gauss-Kuzmin law [calc: the series sum_k p(k) (-log p(k))^r]: the
- * terms k <= K directly, the tail by Euler-Maclaurin (integral over k > K by Simpson's rule in
- * u = log k, plus half the term at K, minus the term at K counted twice).
+ * terms k <= K directly, the tail by the first Euler-Maclaurin correction,
+ * sum_{k>K} f(k) = integral_K^inf f(x) dx - f(K)/2 + O(f'(K)), the integral by Simpson's rule in
+ * u = log x.
  */
 function gaussKuzminMoment(r: number): number {
   const K = 200_000;
