@@ -1,5 +1,6 @@
 import type { AnalysisResult, LengthRow, SymbolCount } from '../core';
 import { symbolizationText } from '../figures/symbolizationText';
+import { diagnosticsText } from './diagnosticsText';
 
 const fmt = (x: number | null | undefined, digits = 4): string => (x === null || x === undefined || !Number.isFinite(x) ? '-' : x.toFixed(digits));
 const interval = (ci: readonly [number, number] | null | undefined, digits = 4): string => (ci ? `[${fmt(ci[0], digits)}, ${fmt(ci[1], digits)}]` : '');
@@ -39,6 +40,7 @@ export function summaryText(result: AnalysisResult, options: { table: boolean })
   for (const { label, alt, headline } of rows) {
     lines.push(`  ${label.padEnd(width)}  ${fmt(alt.estimate).padStart(9)} ${interval(alt.ci95).padEnd(20)} ${headline ? '(headline)' : ''}`.trimEnd());
   }
+  if (result.diagnostics !== undefined) lines.push('', ...diagnosticsText(result.diagnostics));
   if (options.table) {
     lines.push('');
     lines.push(tableText(result.lengths, unit));

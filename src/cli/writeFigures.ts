@@ -1,7 +1,7 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { AnalysisResult } from '../core';
-import { exportFigures, figureCsv, figureSvg } from '../figures';
+import { exportDiagnosticFigures, exportFigures, figureCsv, figureSvg } from '../figures';
 import { OutputError } from './outputStream';
 
 const REASONS: Readonly<Record<string, string>> = {
@@ -32,7 +32,7 @@ export async function writeFigures(result: AnalysisResult, dir: string, note: (l
     throw new OutputError(`${dir}: cannot make the figures folder (${writeFailureReason(e)})`, { cause: e });
   }
   const written: string[] = [];
-  for (const { id, figure, caption } of exportFigures(result)) {
+  for (const { id, figure, caption } of [...exportFigures(result), ...exportDiagnosticFigures(result)]) {
     if (figure.kind !== 'figure') {
       note(`returnrate: note: figure ${id} not written: ${figure.message}`);
       continue;

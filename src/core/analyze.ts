@@ -34,6 +34,7 @@ import {
   varianceUnitLabel,
 } from './estimate/units';
 import { varianceGrowth } from './estimate/varianceGrowth';
+import { mixingDiagnostics } from './diagnostics/mixingDiagnostics';
 
 /** Progress, cancellation and reference facts passed through analyzeSequence. */
 export interface AnalysisHooks {
@@ -132,7 +133,14 @@ export function analyzeSequence(
     alphabet: listed.symbols,
     alphabetUnlisted: listed.unlisted,
   };
-  return analyzeFromScan(scan, summary, settings, hooks.reference === undefined ? {} : { reference: hooks.reference });
+  const result = analyzeFromScan(scan, summary, settings, hooks.reference === undefined ? {} : { reference: hooks.reference });
+  // Diagnostics need the symbols themselves (the scan keeps only sums): the plug-in order of sigma^2
+  // and the top block length used feed the ACF and the reading.
+  const diagnostics = mixingDiagnostics(sequence.symbols, sequence.alphabet.length, {
+    informationOrder: result.sigma2.alternatives['information-batch-means']?.lengthsUsed?.[0] ?? 1,
+    blockLengthsUsed: Math.max(result.trustedRange?.hi ?? 0, result.entropy.lengthsUsed[1]),
+  });
+  return { ...result, diagnostics };
 }
 
 /**

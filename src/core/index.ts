@@ -126,3 +126,9 @@ export {
   fitCalibrationModel,
 } from './calibration/calibrationResult';
 export type { CalibratedAnalysis, CalibrationModel, CalibrationModelFacts, CalibrationResult } from './calibration/calibrationResult';
+// Mixing diagnostics and information moments
+export { mixingDiagnostics } from './diagnostics/mixingDiagnostics';
+export type { DiagnosticsSummary, DiagnosticsOptions } from './diagnostics/mixingDiagnostics';
+export type { DecayFit } from './diagnostics/decayFits';
+export type { MixingReading, MixingVerdict } from './diagnostics/mixingReading';
+export type { InformationMoments } from './diagnostics/informationMoments';

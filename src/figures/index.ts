@@ -37,3 +37,7 @@ export { calibrationFigure, CALIBRATION_STYLES } from './calibrationFigure';
 export type { CalibratedQuantity } from './calibrationFigure';
 export { symbolizationSeriesFigure, symbolizationHistogramFigure, SYMBOLIZATION_STYLES } from './symbolizationFigures';
 export { symbolizationText, symbolizationMethod } from './symbolizationText';
+export { mixingFigure, decayValue, MIXING_STYLES } from './mixingFigure';
+export { autocorrelationFigure } from './autocorrelationFigure';
+export { exportDiagnosticFigures, diagnosticCaption, isDiagnosticFigureId, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
+export type { DiagnosticFigureId, ExportedDiagnosticFigure } from './exportDiagnosticFigures';

@@ -1,5 +1,6 @@
 import type { AlternativeEstimate, AnalysisResult } from '../core';
 import { DEFAULT_EXPORT_VIEW, exportFigures, type ExportViewOptions } from './exportFigures';
+import { diagnosticsSection } from './diagnosticsReport';
 import { figureSvg } from './figureSvg';
 import { symbolizationMethod, symbolizationText } from './symbolizationText';
 import { xmlText } from './xmlText';
@@ -235,6 +236,7 @@ export function reportHtml(result: AnalysisResult, options: ReportOptions = {}):
     warningsSection(result),
     settingsSection(result),
     figuresSection(result, options.view ?? DEFAULT_EXPORT_VIEW),
+    diagnosticsSection(result),
     lengthsSection(result),
     methodsSection(result),
     cautionsSection(physiological),

@@ -1,6 +1,7 @@
 import { useEffect } from 'react';
 import { CalibrationPanel } from './panels/CalibrationPanel';
 import { ConvergencePanel } from './panels/ConvergencePanel';
+import { DiagnosticsPanel } from './panels/DiagnosticsPanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
 import { FailureAlert } from './panels/FailureAlert';
@@ -77,7 +78,12 @@ export function App() {
         <ErrorBoundary name="Return law figure">
           <ReturnLawPanel />
         </ErrorBoundary>
-        <ErrorBoundary name="Calibration"><CalibrationPanel /></ErrorBoundary>
+        <ErrorBoundary name="Mixing diagnostics">
+          <DiagnosticsPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Calibration">
+          <CalibrationPanel />
+        </ErrorBoundary>
       </div>
       <footer className="app-footer">
         Demo data are invented. Estimates are research estimates, not a diagnosis; everything runs in this browser tab and no data leave it.

@@ -8,7 +8,7 @@ import { cli, failureLine, tempFolder } from './cliHarness';
 
 const folder = tempFolder('figures');
 let chain = '';
-const STEMS = ['convergence', 'envelopes', 'fluctuations-histogram', 'fluctuations-qq', 'return-law', 'variance-growth'];
+const STEMS = ['convergence', 'envelopes', 'fluctuations-histogram', 'fluctuations-qq', 'information-acf', 'mixing-beta', 'return-law', 'variance-growth'];
 
 beforeAll(async () => {
   // A two-state chain (invented parameters); only the files are checked here.

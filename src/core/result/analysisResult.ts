@@ -4,6 +4,7 @@
  */
 import type { SymbolCount } from './alphabetSummary';
 import type { SymbolizationRecord } from '../symbolize/symbolizationRecord';
+import type { DiagnosticsSummary } from '../diagnostics/mixingDiagnostics';
 
 export const ANALYSIS_SCHEMA = 'returnrate.analysis/1';
 /** Several analyses of one input (e.g. one per FASTA record): { schema, records: AnalysisResult[] }. */
@@ -186,4 +187,7 @@ export interface AnalysisResult {
     readonly intervalBatches: number;
     readonly matchWindow: number;
   };
+  /** Mixing diagnostics and one-symbol information moments (src/core/diagnostics); absent in results
+   * saved before they were added and in results built from a scan alone. */
+  readonly diagnostics?: DiagnosticsSummary;
 }

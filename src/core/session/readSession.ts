@@ -212,6 +212,26 @@ function result(value: unknown, path: string): void {
   const scan = object(r['scan'], `${path}.scan`);
   for (const key of ['maxN', 'batchLength', 'batchCount', 'intervalBatches', 'matchWindow']) num(scan, key, `${path}.scan`);
   bool(scan, 'exhausted', `${path}.scan`);
+  if (r['diagnostics'] !== undefined) diagnostics(r['diagnostics'], `${path}.diagnostics`);
+}
+
+/** Optional diagnostics: the parts the views draw are objects or null, and the reading has its words. */
+function diagnostics(value: unknown, path: string): void {
+  const d = object(value, path);
+  for (const key of ['beta', 'autocorrelation', 'moments']) if (d[key] !== null) object(d[key], `${path}.${key}`);
+  const reading = object(d['reading'], `${path}.reading`);
+  str(reading, 'verdict', `${path}.reading`);
+  str(reading, 'text', `${path}.reading`);
+  str(reading, 'caveat', `${path}.reading`);
+  if (d['beta'] !== null) {
+    const b = d['beta'] as Obj;
+    for (const key of ['gaps', 'beta', 'noiseFloor']) numbersOrNull(b[key], `${path}.beta.${key}`);
+  }
+  if (d['autocorrelation'] !== null) {
+    const a = d['autocorrelation'] as Obj;
+    for (const key of ['lags', 'acf']) numbersOrNull(a[key], `${path}.autocorrelation.${key}`);
+    num(a, 'band', `${path}.autocorrelation`);
+  }
 }
 
 function checkSchema(top: Obj): void {

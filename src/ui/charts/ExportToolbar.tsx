@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { exportCaption, figureCsv, figureSvg, type ExportFigureId, type FigureModel } from '../../figures';
+import { diagnosticCaption, exportCaption, figureCsv, figureSvg, isDiagnosticFigureId, type DiagnosticFigureId, type ExportFigureId, type FigureModel } from '../../figures';
 import { downloadBlob } from '../../export/downloadBlob';
 import { exportFileName } from '../../export/exportFileName';
 import { svgToPng } from '../../export/svgToPng';
@@ -12,12 +12,12 @@ const PNG_SCALES = [1, 2, 4] as const;
  * as CSV. The files are made from the same model the page draws, with a caption naming the result's
  * input, SHA-256, settings and the view options; nothing leaves the browser.
  */
-export function ExportToolbar({ model, figureId }: { readonly model: FigureModel; readonly figureId: ExportFigureId }) {
+export function ExportToolbar({ model, figureId }: { readonly model: FigureModel; readonly figureId: ExportFigureId | DiagnosticFigureId }) {
   const result = useAppState((s) => s.result);
   const view = useAppState((s) => s.view);
   const [problem, setProblem] = useState<string | null>(null);
   if (result === null) return null;
-  const caption = exportCaption(figureId, result, view);
+  const caption = isDiagnosticFigureId(figureId) ? diagnosticCaption(figureId, result) : exportCaption(figureId, result, view);
   const name = (ext: string): string => exportFileName(result.input.name, figureId, ext);
   const svg = (): string => figureSvg(model, caption);
   const run = (work: () => Promise<void> | void) => () => {

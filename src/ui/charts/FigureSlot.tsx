@@ -1,5 +1,5 @@
 import { useMemo, type ReactNode } from 'react';
-import type { ExportFigureId, Figure, FigureSize } from '../../figures';
+import type { DiagnosticFigureId, ExportFigureId, Figure, FigureSize } from '../../figures';
 import { ChartFrame } from './ChartFrame';
 import { ExportToolbar } from './ExportToolbar';
 import { figureHeight, useElementWidth } from './useElementWidth';
@@ -14,7 +14,7 @@ export function FigureSlot({
 }: {
   readonly build: (size: FigureSize) => Figure;
   readonly testId: string;
-  readonly exportId?: ExportFigureId | undefined;
+  readonly exportId?: ExportFigureId | DiagnosticFigureId | undefined;
 }): ReactNode {
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const w = Math.max(260, width);
