@@ -87,3 +87,12 @@ export { writeSession } from './session/writeSession';
 export { readSession, looksLikeSession } from './session/readSession';
 export { SessionError } from './session/sessionError';
 export type { SessionErrorCode } from './session/sessionError';
+
+// Two sequences: cross and relative entropy rates from waiting times
+export { compareSequences, pairCount, MIN_PAIR_LENGTH } from './cross/compareSequences';
+export type { ComparisonHooks, ComparisonInputFacts, CrossReferenceFacts } from './cross/compareSequences';
+export { COMPARISON_SCHEMA } from './cross/comparisonResult';
+export type { ComparisonResult, ComparisonRow, ComparisonInput, ComparisonExact, ComparisonFluctuations, RateEstimate } from './cross/comparisonResult';
+export { crossReferenceOfSpecs, transitionRowsOfSpec } from './cross/crossReferenceOfSpecs';
+export { markovCrossFacts } from './sources/markovCrossEntropy';
+export type { MarkovCrossFacts } from './sources/markovCrossEntropy';
