@@ -33,3 +33,4 @@ export { exportCaption, exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, E
 export type { ExportFigureId, ExportedFigure, ExportViewOptions } from './exportFigures';
 export { reportHtml, looksPhysiological } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
+export { comparisonConvergenceFigure, comparisonQuantileFigure, WAITING_FLUCTUATION_LABEL } from './comparisonFigures';

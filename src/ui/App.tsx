@@ -1,4 +1,5 @@
 import { useEffect } from 'react';
+import { ComparePanel } from './panels/ComparePanel';
 import { ConvergencePanel } from './panels/ConvergencePanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
 import { ErrorBoundary } from './panels/ErrorBoundary';
@@ -76,6 +77,7 @@ export function App() {
         <ErrorBoundary name="Return law figure">
           <ReturnLawPanel />
         </ErrorBoundary>
+        <ErrorBoundary name="Compare two sequences"><ComparePanel /></ErrorBoundary>
       </div>
       <footer className="app-footer">
         Demo data are invented. Estimates are research estimates, not a diagnosis; everything runs in this browser tab and no data leave it.

@@ -17,8 +17,10 @@ import { initialSettingsState, restoreSettings, settingsActions } from './settin
 import type { SettingsState } from './settingsSlice';
 import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
+import { comparisonActions, initialComparisonState, restoreComparisonResult } from './comparisonSlice';
+import type { ComparisonState } from './comparisonSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState & ComparisonState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
@@ -28,10 +30,10 @@ const STORAGE_VERSION = 1;
 
 /** The part that survives a reload: settings, reading choices, demo length, view options and the
  * last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'>;
+export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'> & Pick<ComparisonState, 'comparisonResult'>;
 
 export function persistedPart(state: AppState, savedResult: (state: ResultState) => ResultState = resultForStorage): PersistedState {
-  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...savedResult(state) };
+  return { settings: state.settings, reading: state.reading, demoLength: state.demoLength, view: state.view, ...savedResult(state), comparisonResult: state.comparisonResult };
 }
 
 /** Saved state merged into a fresh one; anything unreadable falls back to the initial values. */
@@ -44,6 +46,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
     demoLength: restoreDemoLength(s.demoLength),
     view: restoreView(s.view),
     ...restoreResult(s),
+    comparisonResult: restoreComparisonResult(s.comparisonResult),
   };
 }
 
@@ -111,7 +114,7 @@ export interface AppStoreOptions {
  * last result) to `storage` under STORAGE_KEY. Tests pass an in-memory storage.
  */
 export function createAppStore(storage: () => StateStorage, options: AppStoreOptions = {}) {
-  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState };
+  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState, ...initialComparisonState };
   return createStore<AppState>()(
     persist(() => initial, {
       name: STORAGE_KEY,
@@ -127,7 +130,7 @@ export { memoryStorage };
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store), ...comparisonActions(store) };
 }
 
 const page = pageStorage();
@@ -170,4 +173,5 @@ export const {
   openSession,
   sessionFailed,
   checkData,
+  chooseCompareSide,
 } = bindActions(appStore);
