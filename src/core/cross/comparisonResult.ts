@@ -30,7 +30,8 @@ export interface ComparisonRow {
   readonly censored: number;
   readonly censoredFraction: number;
   /** Mean log W_n over all positions, censored ones counted at their least possible value
-   * log(|B| - n + 2), nats: a lower bound when censored > 0; null when no position. */
+   * log(|B_g| - n + 2) (B_g the position's B segment), nats: a lower bound when censored > 0;
+   * null with fewer than two positions. */
   readonly meanLogWait: number | null;
   /** Variance of log W_n with the same convention, nats^2. */
   readonly varLogWait: number | null;
