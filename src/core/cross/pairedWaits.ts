@@ -43,7 +43,7 @@ export interface PairedWaitsOptions {
  * segments and the blocks of A's g-th segment wait in B's g-th segment (scanWaitingTimes on each
  * pair). Why pairs: with one B shared by all of A, every occurrence in A of a frequent block waits
  * the same B-dependent time, so batches of A positions share B's randomness and batch means over A
- * alone understate the error (simulation: spreads of 10 to 20 times the batch-means standard error
+ * alone understate the error (simulation: spreads of about 10 to 15 times the batch-means standard error
  * between independent B for the chains of the validation tests). Disjoint pairs are close to
  * independent replications for mixing sources, so batch means over pairs (Schmeiser 1982) see both
  * sources of variation. The price: each B segment is |B|/K long, so waits are censored at smaller n.
