@@ -139,7 +139,7 @@ export function ComparePanel() {
           Compare
         </button>
         <button type="button" className="secondary" data-testid="compare-cancel" onClick={comparisonRunner.cancel} disabled={!running}>
-          Cancel
+          Stop comparing
         </button>
       </div>
       {running && (
