@@ -91,8 +91,9 @@ export function compareSequences(
 ): ComparisonResult {
   const N = a.symbols.length;
   const M = b.symbols.length;
-  validateSettings(settings, N);
+  if (N < 2) throw new RangeError(`sequence A needs at least 2 symbols; got ${N}`);
   if (M < 1) throw new RangeError('sequence B is empty');
+  validateSettings(settings, N);
   const { confidence } = settings;
   const K = hooks.pairs ?? pairCount(N, M);
   // Each pair's A segment must hold an n-block for every n scanned.

@@ -37,8 +37,10 @@ describe('compareSequences', () => {
     expect(r.warnings.map((w) => w.code)).toContain('many-censored');
   });
 
-  it('stops with ScanCancelled when asked', () => {
+  it('stops with ScanCancelled when asked, and names A when it is too short', () => {
     const a = parseSourceSpec('coin').generate(2000, 1);
     expect(() => compareSequences(a, a, facts('a'), facts('b'), DEFAULT_SETTINGS, { shouldStop: () => true })).toThrow(ScanCancelled);
+    const one = parseSourceSpec('coin').generate(1, 1);
+    expect(() => compareSequences(one, a, facts('a'), facts('b'), DEFAULT_SETTINGS)).toThrow(/sequence A needs at least 2 symbols; got 1/);
   });
 });
