@@ -2,6 +2,7 @@ import type { Writable } from 'node:stream';
 import { parseArgs } from 'node:util';
 import { PROGRAM_VERSION, SOURCE_SPEC_FORMS } from '../core';
 import { analyzeCommand } from './analyzeCommand';
+import { compareCommand } from './compareCommand';
 import { describeFailure } from './failure';
 import { generateCommand } from './generateCommand';
 import { ANALYSIS_OPTIONS, READ_OPTIONS } from './options';
@@ -21,6 +22,11 @@ usage
   returnrate analyze --source SPEC --length L [--seed S] [analysis options]
   returnrate returns FILE --n N [reading options] [--out PATH]
   returnrate generate SOURCE --length L [--seed S] [--out PATH]
+  returnrate compare FILE_A FILE_B [reading options] [analysis options] [--json PATH|-]
+  returnrate compare (FILE_A | --source SPEC --length L [--seed S])
+                     (FILE_B | --source-b SPEC --length-b L [--seed-b S]) [options]
+                             cross entropy rate of A against B from waiting times, the entropy
+                             rate of A, and the relative entropy rate, each with its interval
 
 reading options
   -f, --format chars|tokens|fasta|csv|bytes|numbers   default: by extension, else tokens when
@@ -83,6 +89,9 @@ const OPTIONS = {
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },
   seed: { type: 'string', short: 's' },
+  'source-b': { type: 'string' },
+  'length-b': { type: 'string' },
+  'seed-b': { type: 'string' },
   out: { type: 'string', short: 'o' },
   n: { type: 'string' },
   help: { type: 'boolean', short: 'h' },
@@ -157,7 +166,7 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
     return;
   }
   if ((command === 'analyze' || command === 'returns') && target !== undefined) context.file = target;
-  if (rest.length > 0) throw new UsageError(`unexpected argument "${rest[0]}"`);
+  if (rest.length > (command === 'compare' ? 1 : 0)) throw new UsageError(`unexpected argument "${rest[command === 'compare' ? 1 : 0]}"`);
   const v = values as Record<string, string | boolean | undefined>;
   switch (command) {
     case 'analyze':
@@ -166,8 +175,10 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
       return returnsCommand(target, v, io);
     case 'generate':
       return generateCommand(target, v, io);
+    case 'compare':
+      return compareCommand(target, rest[0], v, io);
     default:
-      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate`);
+      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate, compare`);
   }
 }
 

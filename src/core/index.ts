@@ -132,3 +132,11 @@ export type { DiagnosticsSummary, DiagnosticsOptions } from './diagnostics/mixin
 export type { DecayFit } from './diagnostics/decayFits';
 export type { MixingReading, MixingVerdict } from './diagnostics/mixingReading';
 export type { InformationMoments } from './diagnostics/informationMoments';
+// Two sequences: cross and relative entropy rates from waiting times
+export { compareSequences, pairCount, MIN_PAIR_LENGTH } from './cross/compareSequences';
+export type { ComparisonHooks, ComparisonInputFacts, CrossReferenceFacts } from './cross/compareSequences';
+export { COMPARISON_SCHEMA } from './cross/comparisonResult';
+export type { ComparisonResult, ComparisonRow, ComparisonInput, ComparisonExact, ComparisonFluctuations, RateEstimate } from './cross/comparisonResult';
+export { crossReferenceOfSpecs, transitionRowsOfSpec } from './cross/crossReferenceOfSpecs';
+export { markovCrossFacts } from './sources/markovCrossEntropy';
+export type { MarkovCrossFacts } from './sources/markovCrossEntropy';

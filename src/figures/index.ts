@@ -41,3 +41,4 @@ export { mixingFigure, decayValue, MIXING_STYLES } from './mixingFigure';
 export { autocorrelationFigure } from './autocorrelationFigure';
 export { exportDiagnosticFigures, diagnosticCaption, isDiagnosticFigureId, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
 export type { DiagnosticFigureId, ExportedDiagnosticFigure } from './exportDiagnosticFigures';
+export { comparisonConvergenceFigure, comparisonQuantileFigure, WAITING_FLUCTUATION_LABEL } from './comparisonFigures';

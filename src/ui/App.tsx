@@ -1,5 +1,6 @@
 import { useEffect } from 'react';
 import { CalibrationPanel } from './panels/CalibrationPanel';
+import { ComparePanel } from './panels/ComparePanel';
 import { ConvergencePanel } from './panels/ConvergencePanel';
 import { DiagnosticsPanel } from './panels/DiagnosticsPanel';
 import { EnvelopePanel } from './panels/EnvelopePanel';
@@ -83,6 +84,9 @@ export function App() {
         </ErrorBoundary>
         <ErrorBoundary name="Calibration">
           <CalibrationPanel />
+        </ErrorBoundary>
+        <ErrorBoundary name="Compare two sequences">
+          <ComparePanel />
         </ErrorBoundary>
       </div>
       <footer className="app-footer">

@@ -19,8 +19,10 @@ import { initialSettingsState, restoreSettings, settingsActions } from './settin
 import type { SettingsState } from './settingsSlice';
 import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
+import { comparisonActions, initialComparisonState, restoreComparisonResult } from './comparisonSlice';
+import type { ComparisonState } from './comparisonSlice';
 
-export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState & CalibrationState;
+export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState & CalibrationState & ComparisonState;
 /** What slice actions need of a store. */
 export type StoreHandle = Pick<StoreApi<AppState>, 'getState' | 'setState'>;
 
@@ -30,7 +32,7 @@ const STORAGE_VERSION = 1;
 
 /** The part that survives a reload: settings, reading choices, demo length, view options and the
  * last result (see resultForStorage). */
-export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'> & CalibrationState;
+export type PersistedState = SettingsState & ResultState & ViewState & Pick<InputState, 'reading' | 'demoLength'> & CalibrationState & Pick<ComparisonState, 'comparisonResult'>;
 
 export function persistedPart(state: AppState, savedResult: (state: ResultState) => ResultState = resultForStorage): PersistedState {
   return {
@@ -41,6 +43,7 @@ export function persistedPart(state: AppState, savedResult: (state: ResultState)
     ...savedResult(state),
     calibration: state.calibration,
     calibrationReplicates: state.calibrationReplicates,
+    comparisonResult: state.comparisonResult,
   };
 }
 
@@ -55,6 +58,7 @@ export function mergePersisted(stored: unknown, current: AppState): AppState {
     view: restoreView(s.view),
     ...restoreResult(s),
     ...restoreCalibration(s),
+    comparisonResult: restoreComparisonResult(s.comparisonResult),
   };
 }
 
@@ -122,7 +126,7 @@ export interface AppStoreOptions {
  * last result) to `storage` under STORAGE_KEY. Tests pass an in-memory storage.
  */
 export function createAppStore(storage: () => StateStorage, options: AppStoreOptions = {}) {
-  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState, ...initialCalibrationState };
+  const initial = { ...initialInputState, ...initialSettingsState, ...initialRunState, ...initialResultState, ...initialViewState, ...initialSessionState, ...initialCalibrationState, ...initialComparisonState };
   return createStore<AppState>()(
     persist(() => initial, {
       name: STORAGE_KEY,
@@ -138,7 +142,7 @@ export { memoryStorage };
 
 /** All slice actions bound to one store. */
 export function bindActions(store: StoreHandle) {
-  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store), ...calibrationActions(store) };
+  return { ...inputActions(store), ...settingsActions(store), ...runActions(store), ...resultActions(store), ...viewActions(store), ...sessionActions(store), ...calibrationActions(store), ...comparisonActions(store) };
 }
 
 const page = pageStorage();
@@ -183,4 +187,5 @@ export const {
   checkData,
   setCalibrationReplicates,
   clearCalibration,
+  chooseCompareSide,
 } = bindActions(appStore);

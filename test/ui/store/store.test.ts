@@ -37,11 +37,11 @@ describe('app store persistence', () => {
     expect(state.result).toBeNull();
   });
 
-  it('saves only settings, reading choices, demo length, view options, result and the paths flag, and the calibration', () => {
+  it('saves only settings, reading choices, demo length, view options, result and the paths flag, the calibration and the last comparison', () => {
     const storage = memoryStorage();
     testStore(storage).updateSettings({ maxN: 7 });
     const saved = JSON.parse(String(storage.getItem(STORAGE_KEY))) as { state: Record<string, unknown> };
-    expect(Object.keys(saved.state).sort()).toEqual(['calibration', 'calibrationReplicates', 'demoLength', 'pathsDropped', 'reading', 'result', 'settings', 'view']);
+    expect(Object.keys(saved.state).sort()).toEqual(['calibration', 'calibrationReplicates', 'comparisonResult', 'demoLength', 'pathsDropped', 'reading', 'result', 'settings', 'view']);
   });
 
   it('writes the saved state only when a saved part changes, not on run progress', () => {

@@ -1,0 +1,56 @@
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { expect, test } from '@playwright/test';
+import { twoStateChainText } from './sequenceFiles';
+import { collectErrors, screenshot } from './pageWatch';
+
+function tempFile(name: string, text: string): string {
+  const path = join(mkdtempSync(join(tmpdir(), 'returnrate-e2e-compare-')), name);
+  writeFileSync(path, text);
+  return path;
+}
+
+// Two invented two-state chains (stay probabilities chosen for the test, not from any data set); the
+// test checks only that the page shows the three rates with intervals, never a value.
+const FILE_A = () => tempFile('river-gauge-a.txt', twoStateChainText(60_000, [0.9, 0.6], 11));
+const FILE_B = () => tempFile('river-gauge-b.txt', twoStateChainText(60_000, [0.7, 0.5], 12));
+const INTERVAL = /^-?\d+\.\d{4} to -?\d+\.\d{4}$/;
+
+test('compares two files: cross entropy, h(A) and relative entropy, each with an interval, and the two figures', async ({ page }) => {
+  const errors = collectErrors(page);
+  await page.goto('/');
+  const panel = page.getByTestId('compare-panel');
+  await panel.scrollIntoViewIfNeeded();
+  await page.getByTestId('compare-file-a').setInputFiles(FILE_A());
+  await page.getByTestId('compare-file-b').setInputFiles(FILE_B());
+  await expect(page.getByTestId('compare-chosen-a')).toContainText('river-gauge-a.txt');
+  await expect(page.getByTestId('compare-chosen-b')).toContainText('river-gauge-b.txt');
+  await page.getByTestId('compare-run').click();
+  await expect(page.getByTestId('compare-cross').locator('td').nth(1)).toHaveText(INTERVAL, { timeout: 60_000 });
+  for (const id of ['cross', 'entropy-a', 'relative']) {
+    const row = page.getByTestId(`compare-${id}`);
+    await expect(row.locator('td').nth(0)).toHaveText(/^-?\d+\.\d{4}$/);
+    await expect(row.locator('td').nth(1)).toHaveText(INTERVAL);
+  }
+  await expect(page.getByTestId('compare-convergence-figure')).toBeVisible();
+  await expect(page.getByTestId('compare-qq-figure')).toBeVisible();
+  await screenshot(page, 'compare-files');
+  expect(errors).toEqual([]);
+});
+
+test('a reference-source pair shows the exact values, and Cancel stops a running comparison', async ({ page }) => {
+  await page.goto('/');
+  await page.getByTestId('compare-panel').scrollIntoViewIfNeeded();
+  await page.getByTestId('compare-source-a').selectOption({ index: 2 });
+  await page.getByTestId('compare-source-b').selectOption({ index: 1 });
+  await page.getByTestId('compare-run').click();
+  await page.getByTestId('compare-cancel').click();
+  await expect(page.getByTestId('compare-message')).toContainText('cancelled');
+  await expect(page.getByTestId('compare-run')).toBeEnabled();
+  // Run again to the end: both sides are first-order chains, so the exact column appears.
+  await page.getByTestId('compare-run').click();
+  await expect(page.getByTestId('compare-cross').locator('td').nth(1)).toHaveText(INTERVAL, { timeout: 60_000 });
+  await expect(page.getByTestId('compare-cross').locator('td').nth(2)).toHaveText(/^\d+\.\d{4}$/);
+  await screenshot(page, 'compare-sources');
+});
