@@ -1,6 +1,7 @@
 import { basename } from 'node:path';
 import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
 import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
+import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
@@ -110,12 +111,21 @@ function progressLine(io: CliIo, values: Values, maxN: number, started: number):
   };
 }
 
+/** A result's JSON, summary, figures and report, as `analyze` writes them (also for chunked runs and `merge`). */
+export async function emitAnalysis(result: AnalysisResult, values: Values, io: CliIo): Promise<void> {
+  await emit(result, [result], values, io);
+  if (values.figures !== undefined) await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
+  if (values.report !== undefined) await writeReport(result, String(values.report));
+}
+
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   const options = settingsFrom(values);
   const loaded = await load(file, values, io);
   if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
+  const chunk = chunkSizeOption(values);
+  if (chunk !== undefined) return chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;

@@ -1,7 +1,8 @@
 import type { Writable } from 'node:stream';
 import { parseArgs } from 'node:util';
 import { PROGRAM_VERSION, SOURCE_SPEC_FORMS } from '../core';
-import { analyzeCommand } from './analyzeCommand';
+import { analyzeCommand, emitAnalysis } from './analyzeCommand';
+import { mergeCommand } from './chunkedCommand';
 import { describeFailure } from './failure';
 import { generateCommand } from './generateCommand';
 import { ANALYSIS_OPTIONS, READ_OPTIONS } from './options';
@@ -21,6 +22,7 @@ usage
   returnrate analyze --source SPEC --length L [--seed S] [analysis options]
   returnrate returns FILE --n N [reading options] [--out PATH]
   returnrate generate SOURCE --length L [--seed S] [--out PATH]
+  returnrate merge PART... [--json PATH|-] [--figures DIR] [--report PATH.html] [--no-table] [--quiet]
 
 reading options
   -f, --format chars|tokens|fasta|csv|bytes   default: by extension, else tokens when fields are
@@ -47,6 +49,14 @@ analysis options
                              methods with citations, cautions) that prints to PDF from a browser
       --timing               print timing and peak memory as one JSON line on standard error
 
+chunked runs (merged exactly; returns are censored at chunk ends, block frequencies are per chunk)
+      --chunk SIZE           analyse consecutive chunks of SIZE symbols (rounded up to the batch
+                             grid) one after another and merge their statistics
+      --plan                 with --chunk: print {"symbols", "chunkSize", "parts"} and stop
+      --parts-out DIR        with --chunk: write part files (returnrate.part/1) instead of a result
+      --part I               with --parts-out: only part I (0-based), e.g. one task of a job array
+  returnrate merge PART...   merges the part files of one input into the usual result
+
 reference sources (SPEC / SOURCE)
   ${SOURCE_SPEC_FORMS.join('\n  ')}
 
@@ -65,6 +75,10 @@ const OPTIONS = {
   quiet: { type: 'boolean', short: 'q' },
   timing: { type: 'boolean' },
   progress: { type: 'boolean' },
+  chunk: { type: 'string' },
+  plan: { type: 'boolean' },
+  'parts-out': { type: 'string' },
+  part: { type: 'string' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },
   seed: { type: 'string', short: 's' },
@@ -142,8 +156,9 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
     return;
   }
   if ((command === 'analyze' || command === 'returns') && target !== undefined) context.file = target;
-  if (rest.length > 0) throw new UsageError(`unexpected argument "${rest[0]}"`);
   const v = values as Record<string, string | boolean | undefined>;
+  if (command === 'merge') return mergeCommand(positionals.slice(1), (r) => emitAnalysis(r, v, io));
+  if (rest.length > 0) throw new UsageError(`unexpected argument "${rest[0]}"`);
   switch (command) {
     case 'analyze':
       return analyzeCommand(target, v, io);
@@ -152,7 +167,7 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
     case 'generate':
       return generateCommand(target, v, io);
     default:
-      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate`);
+      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate, merge`);
   }
 }
 

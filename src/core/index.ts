@@ -87,3 +87,11 @@ export { writeSession } from './session/writeSession';
 export { readSession, looksLikeSession } from './session/readSession';
 export { SessionError } from './session/sessionError';
 export type { SessionErrorCode } from './session/sessionError';
+
+// Chunked runs and part files (mergeable per-level statistics)
+export { chunkPlan, chunkBounds, mergedPositions, scanChunk, scanChunked, mergeScanParts } from './returns/chunkedScan';
+export type { ChunkPlan, ScanPart, ChunkHooks } from './returns/chunkedScan';
+export { mergeLevelStats, mergeSampledPaths } from './returns/mergeLevels';
+export { PART_SCHEMA, PartFileError, partFileJson, readPartFile, checkPartsAgree } from './result/partFile';
+export type { PartFacts, PartFileContents } from './result/partFile';
+export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';

@@ -24,6 +24,11 @@ export interface ScanOptions {
   readonly shouldStop?: () => boolean;
   /** Keep the forward return of every position at this one block length (see ReturnScan.captured). */
   readonly captureLevel?: number;
+  /** Positions per fine batch (a power of two), overriding batchTarget: chunked runs use the whole
+   * sequence's batch length so that their batches line up (chunkedScan.ts). */
+  readonly batchLength?: number;
+  /** Sampling stride of the paths (a power of two), overriding sampleTarget, for the same reason. */
+  readonly sampleStride?: number;
 }
 
 /**
@@ -47,10 +52,14 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) {
     throw new RangeError(`alphabetSize must be a positive integer; got ${alphabetSize}`);
   }
-  const batchLength = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
+  const batchLength = options.batchLength ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
+  const strideGiven = options.sampleStride;
+  if (!isPowerOfTwo(batchLength) || (strideGiven !== undefined && !isPowerOfTwo(strideGiven))) {
+    throw new RangeError(`batchLength and sampleStride must be powers of two; got ${batchLength} and ${String(strideGiven)}`);
+  }
   const batchShift = Math.log2(batchLength);
   const batchCount = Math.ceil(N / batchLength);
-  const stride = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
+  const stride = strideGiven ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
   const strideShift = Math.log2(stride);
   const sampleCount = Math.ceil(N / stride);
   const matchWindow = options.matchWindow ?? matchWindowFor(N);
@@ -179,6 +188,10 @@ function refreshWords(
     if (p < 0) p = ~p;
     words[k] = spare[p];
   }
+}
+
+function isPowerOfTwo(x: number): boolean {
+  return Number.isInteger(x) && x >= 1 && x <= 2 ** 30 && (x & (x - 1)) === 0;
 }
 
 /** Sums of a level before any return is added. */
