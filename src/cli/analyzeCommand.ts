@@ -3,6 +3,7 @@ import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences 
 import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
+import { checkMemory } from './memoryBudget';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -125,6 +126,8 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const chunk = chunkSizeOption(values);
+  const N = loaded.sequence.symbols.length;
+  checkMemory({ symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null }, values);
   if (chunk !== undefined) return chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.

@@ -48,6 +48,8 @@ analysis options
       --report PATH.html     write a one-file HTML report (estimates, every figure, settings,
                              methods with citations, cautions) that prints to PDF from a browser
       --timing               print timing and peak memory as one JSON line on standard error
+      --max-memory SIZE      refuse runs whose estimated peak memory exceeds SIZE (e.g. 2G, 512M;
+                             default 90% of the machine's or container's memory) and say what fits
 
 chunked runs (merged exactly; returns are censored at chunk ends, block frequencies are per chunk)
       --chunk SIZE           analyse consecutive chunks of SIZE symbols (rounded up to the batch
@@ -78,6 +80,7 @@ const OPTIONS = {
   chunk: { type: 'string' },
   plan: { type: 'boolean' },
   'parts-out': { type: 'string' },
+  'max-memory': { type: 'string' },
   part: { type: 'string' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },

@@ -95,3 +95,5 @@ export { mergeLevelStats, mergeSampledPaths } from './returns/mergeLevels';
 export { PART_SCHEMA, PartFileError, partFileJson, readPartFile, checkPartsAgree } from './result/partFile';
 export type { PartFacts, PartFileContents } from './result/partFile';
 export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';
+export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
+export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
