@@ -1,6 +1,6 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, createDigestingReader, lengthRowOfLevel } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions } from '../src/core';
+import { adviseMemory, analyzeSequence, createDigestingReader, lengthRowOfLevel, memoryAdviceMessage } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
@@ -61,6 +61,20 @@ function readBuffer(buffer: ArrayBuffer, options: ReaderOptions): ReadResult & {
   return reader.finish();
 }
 
+/**
+ * The page's memory budget. A page cannot learn how much memory its worker may take (typed arrays
+ * lie outside the JS heap that performance.memory describes), so the rule is a fixed 4 GiB: a
+ * 64-bit browser tab holds that, and it takes 10^8 binary symbols (about 1.4 GB) with room to spare.
+ */
+const PAGE_MEMORY_BUDGET = 4 * 2 ** 30;
+
+/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget. */
+function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
+  const input = { symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN };
+  const message = memoryAdviceMessage(adviseMemory(input, PAGE_MEMORY_BUDGET), PAGE_MEMORY_BUDGET, 'a fixed budget', 'page');
+  if (message !== null) throw new RangeError(message);
+}
+
 function release(callback: ProgressCallback): void {
   (callback as Partial<Record<typeof releaseProxy, () => void>>)[releaseProxy]?.();
 }
@@ -71,6 +85,7 @@ const api = {
     try {
       const { name, ...readerOptions } = options;
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
+      checkMemory(read.sequence, settings);
       const result = analyzeSequence(read.sequence, { name, sha256: read.sha256, format: readerOptions.format }, settings, levelHooks(settings, onProgress));
       return read.warnings.length === 0 ? result : { ...result, warnings: [...read.warnings, ...result.warnings] };
     } finally {

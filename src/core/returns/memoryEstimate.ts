@@ -108,9 +108,14 @@ export function formatBytes(bytes: number): string {
 /**
  * The one-line refusal for a run that does not fit, with what would.
  * @param budgetSource where the budget came from, e.g. "--max-memory" or "the machine's memory"
+ * @param host 'page' names the command line's chunked run instead of an option of the page
  */
-export function memoryAdviceMessage(advice: MemoryAdvice, budgetBytes: number, budgetSource: string): string | null {
+export function memoryAdviceMessage(advice: MemoryAdvice, budgetBytes: number, budgetSource: string, host: 'cli' | 'page' = 'cli'): string | null {
   if (advice.kind === 'fits') return null;
+  if (host === 'page') {
+    const what = advice.kind === 'chunk' ? `; the command line can run it in chunks (returnrate analyze FILE --chunk ${advice.chunkSize})` : '';
+    return `this run needs about ${formatBytes(advice.estimate.totalBytes)} of memory, more than the page's ${formatBytes(budgetBytes)} (${budgetSource})${what}`;
+  }
   const need = `this run needs about ${formatBytes(advice.estimate.totalBytes)} but ${formatBytes(budgetBytes)} are available (${budgetSource})`;
   if (advice.kind === 'too-large') return `${need}; the program and the symbols alone leave no room for a scan`;
   return `${need}; a chunked run fits: --chunk ${advice.chunkSize} (about ${formatBytes(advice.chunkEstimate.totalBytes)}; returns are then censored at chunk ends)`;

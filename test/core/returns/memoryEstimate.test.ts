@@ -38,6 +38,9 @@ describe('estimatePeakMemory', () => {
     expect(memoryAdviceMessage(advice, budget, '--max-memory')).toBe(
       `this run needs about ${formatBytes(advice.estimate.totalBytes)} but 1.0 GB are available (--max-memory); a chunked run fits: --chunk ${advice.chunkSize} (about ${formatBytes(advice.chunkEstimate.totalBytes)}; returns are then censored at chunk ends)`,
     );
+    expect(memoryAdviceMessage(advice, budget, 'a fixed budget', 'page')).toBe(
+      `this run needs about ${formatBytes(advice.estimate.totalBytes)} of memory, more than the page's 1.0 GB (a fixed budget); the command line can run it in chunks (returnrate analyze FILE --chunk ${advice.chunkSize})`,
+    );
     expect(adviseMemory(input, 2e9).kind).toBe('fits');
     expect(adviseMemory(input, 1.5e8).kind).toBe('too-large');
     expect(formatBytes(1.37e9)).toBe('1.4 GB');
