@@ -165,7 +165,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
  * gathered in class order: one random read per entry instead of perWord, and independent reads, so
  * the processor overlaps their cache misses. `spare` is overwritten.
  */
-function refreshWords(
+export function refreshWords(
   symbols: SymbolArray,
   offset: number,
   bits: number,
@@ -195,7 +195,7 @@ function isPowerOfTwo(x: number): boolean {
 }
 
 /** Sums of a level before any return is added. */
-function emptySums(bins: number, batchCount: number): LevelSums {
+export function emptySums(bins: number, batchCount: number): LevelSums {
   return {
     classes: 0,
     sumCountLogCount: 0,
@@ -214,7 +214,7 @@ function emptySums(bins: number, batchCount: number): LevelSums {
 }
 
 /** Entries never reached were unique blocks (censored, count 1) or lie past the end (0). */
-function completePaths(
+export function completePaths(
   paths: Float64Array,
   counts: Float64Array,
   N: number,
@@ -239,7 +239,7 @@ function completePaths(
 }
 
 /** One level's LevelStats from its sums; the batch sums are laid out one array per quantity. */
-function levelFromSums(n: number, positions: number, sums: LevelSums, singletons: number, batchCount: number): LevelStats {
+export function levelFromSums(n: number, positions: number, sums: LevelSums, singletons: number, batchCount: number): LevelStats {
   const batchObserved = new Float64Array(batchCount);
   const batchSumLog = new Float64Array(batchCount);
   const batchSumLog2 = new Float64Array(batchCount);
