@@ -1,9 +1,10 @@
 import { basename } from 'node:path';
-import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
-import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, analyzeSequenceSplit, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence } from '../core';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
-import { checkMemory } from './memoryBudget';
+import { checkMemory, fitsMemory } from './memoryBudget';
+import { sharedSymbols, threadRunner, threadsOption } from './scanThreads';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -127,21 +128,29 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const chunk = chunkSizeOption(values);
   const N = loaded.sequence.symbols.length;
-  checkMemory({ symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null }, values);
+  const need = { symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null };
+  // Chunked runs scan one chunk at a time on one thread; the default thread count yields to memory.
+  let threads = chunk === undefined ? threadsOption(values, N) : 1;
+  if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;
+  checkMemory({ ...need, threads }, values);
   if (chunk !== undefined) return chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;
   let lastActive = 0;
   const progress = progressLine(io, values, settings.maxN, t1);
-  const result = analyzeSequence(loaded.sequence, loaded.input, settings, {
+  const hooks: AnalysisHooks = {
     onLevel: (n, active) => {
       positionLevels += active;
       lastActive = active;
       progress?.(n, active);
     },
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
-  });
+  };
+  const result =
+    threads > 1
+      ? await analyzeSequenceSplit({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, threads, threadRunner, hooks)
+      : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   await emit(result, [result], values, io);
@@ -157,6 +166,8 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
       analysisSeconds,
       positionLevels: positionLevels - lastActive,
       peakRssBytes: process.resourceUsage().maxRSS * 1024,
+      threads,
+      estimatedPeakBytes: estimatePeakMemory({ ...need, threads }).totalBytes,
     };
     io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
   }

@@ -31,6 +31,11 @@ export function memoryBudget(values: Values): { bytes: number; source: string } 
   return { bytes: 0.9 * (bounded ? limit : machine), source: bounded ? "90% of the container's memory limit; --max-memory overrides" : "90% of the machine's memory; --max-memory overrides" };
 }
 
+/** True when the run's estimated peak memory is within the budget. */
+export function fitsMemory(input: MemoryEstimateInput, values: Values): boolean {
+  return adviseMemory(input, memoryBudget(values).bytes).kind === 'fits';
+}
+
 /** Refuses a run whose estimated peak memory exceeds the budget, saying what would fit. */
 export function checkMemory(input: MemoryEstimateInput, values: Values): void {
   const budget = memoryBudget(values);

@@ -48,6 +48,9 @@ analysis options
       --report PATH.html     write a one-file HTML report (estimates, every figure, settings,
                              methods with citations, cautions) that prints to PDF from a browser
       --timing               print timing and peak memory as one JSON line on standard error
+      --threads W            share the scan among W worker threads after the first block lengths
+                             (default: the number of cores from 1e6 symbols on, fewer when memory
+                             is short; results equal the one-thread run)
       --max-memory SIZE      refuse runs whose estimated peak memory exceeds SIZE (e.g. 2G, 512M;
                              default 90% of the machine's or container's memory) and say what fits
 
@@ -81,6 +84,7 @@ const OPTIONS = {
   plan: { type: 'boolean' },
   'parts-out': { type: 'string' },
   'max-memory': { type: 'string' },
+  threads: { type: 'string' },
   part: { type: 'string' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },

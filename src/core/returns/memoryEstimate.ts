@@ -60,9 +60,12 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const threads = input.threads ?? 1;
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be a whole number >= 1; got ${threads}`);
   const scanned = Math.min(N, input.chunkSize ?? N);
-  const symbolsBytes = N * bytesPerSymbolId(alphabetSize);
-  // Threads share one scan's positions between them: the same arrays in total, cut W ways.
-  const engineBytes = scanned * engineBytesPerPosition(alphabetSize);
+  // Threads: the symbols are copied once into shared memory, and at the split the groups' slices of
+  // the order and word arrays are made while the whole-sequence arrays still exist (at most twice
+  // the engine's arrays for a moment); after it the groups hold no more than one scan did.
+  const split = threads > 1 ? 2 : 1;
+  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * split;
+  const engineBytes = scanned * engineBytesPerPosition(alphabetSize) * split;
   const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
   const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
   const pathBytes = 256 * maxN * 16;
