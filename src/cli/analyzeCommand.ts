@@ -133,7 +133,22 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   let threads = chunk === undefined ? threadsOption(values, N) : 1;
   if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;
   checkMemory({ ...need, threads }, values);
-  if (chunk !== undefined) return chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
+  if (chunk !== undefined) {
+    const started = performance.now();
+    await chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
+    if (values.timing === true) {
+      const timing = {
+        symbols: N,
+        readSeconds: loaded.readSeconds,
+        analysisSeconds: (performance.now() - started) / 1000,
+        peakRssBytes: process.resourceUsage().maxRSS * 1024,
+        threads: 1,
+        estimatedPeakBytes: estimatePeakMemory({ ...need, threads: 1 }).totalBytes,
+      };
+      io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
+    }
+    return;
+  }
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;

@@ -34,8 +34,13 @@ function tsxBootstrap(): string {
 /** Runs one task on a fresh worker thread; the task's order and word arrays move to it. */
 function runOnThread(task: ScanGroupTask): Promise<ScanGroupResult> {
   return new Promise((resolve, reject) => {
+    const started = performance.now();
+    const entries = task.order.length;
     const worker = FROM_SOURCES ? new Worker(tsxBootstrap(), { eval: true }) : new Worker(WORKER_URL);
+    const debug = process.env.RETURNRATE_DEBUG === '1';
+    if (debug) worker.once('online', () => process.stderr.write(`returnrate: debug: scan thread online after ${(performance.now() - started).toFixed(0)} ms\n`));
     worker.once('message', (result: ScanGroupResult) => {
+      if (debug) process.stderr.write(`returnrate: debug: scan thread done after ${(performance.now() - started).toFixed(0)} ms (${entries} entries from n = ${task.firstN}, split ${(started / 1000).toFixed(2)} s after start)\n`);
       resolve(result);
       void worker.terminate();
     });

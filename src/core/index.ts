@@ -97,6 +97,6 @@ export type { PartFacts, PartFileContents } from './result/partFile';
 export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';
 export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
 export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
-export { scanReturnsSplit, scanGroup, groupBounds } from './returns/splitScan';
+export { scanReturnsSplit, scanGroup, classRuns, assignClasses } from './returns/splitScan';
 export type { ScanGroupTask, ScanGroupResult, GroupRunner } from './returns/splitScan';
 export { analyzeSequenceSplit } from './analyzeSplit';

@@ -39,8 +39,8 @@ export interface ScanGroupResult {
 /** Runs the groups' tasks: in this process (tests, one thread) or on worker threads (hosts). */
 export type GroupRunner = (tasks: ScanGroupTask[]) => ScanGroupResult[] | Promise<ScanGroupResult[]>;
 
-/** Classes per group wanted at the split: enough that cutting at class boundaries balances well. */
-const CLASSES_PER_GROUP = 64;
+/** Classes per group wanted at the split, so that sharing them by size balances well. */
+const CLASSES_PER_GROUP = 16;
 
 /**
  * Refines one group's classes for every level from firstN to maxN, with the same partition and
@@ -114,26 +114,52 @@ function gatherWords(symbols: SymbolArray, offset: number, bits: number, perWord
   }
 }
 
-/** Cuts order[0, active) into `groups` runs of whole classes of about equal size. */
-export function groupBounds(order: Int32Array, active: number, groups: number): number[] {
-  const bounds = [0];
-  for (let g = 1; g < groups; g++) {
-    let cut = Math.max(bounds[bounds.length - 1], Math.round((g * active) / groups));
-    while (cut < active && order[cut] >= 0) cut++;
-    bounds.push(cut);
+/** The classes of order[0, active) as [start, end) runs, and the size of the largest. */
+export function classRuns(order: Int32Array, active: number): { starts: Int32Array; ends: Int32Array; largest: number } {
+  let count = 0;
+  for (let k = 0; k < active; k++) if (order[k] < 0) count++;
+  const starts = new Int32Array(count);
+  const ends = new Int32Array(count);
+  let c = -1;
+  let largest = 0;
+  for (let k = 0; k < active; k++) {
+    if (order[k] < 0) {
+      if (c >= 0) largest = Math.max(largest, k - starts[c]);
+      starts[++c] = k;
+    }
+    ends[c] = k + 1;
   }
-  bounds.push(active);
-  return bounds;
+  if (c >= 0) largest = Math.max(largest, ends[c] - starts[c]);
+  return { starts, ends, largest };
+}
+
+/**
+ * Shares classes among `groups` by size: largest first, each to the group with the least so far
+ * (longest-processing-time-first scheduling, Graham 1969: within 4/3 of the best balance). Returns
+ * for each group the indices of its classes, in their original order.
+ */
+export function assignClasses(sizes: ArrayLike<number>, groups: number): number[][] {
+  const byDecreasingSize = Array.from({ length: sizes.length }, (_, i) => i).sort((a, b) => sizes[b] - sizes[a] || a - b);
+  const load = new Float64Array(groups);
+  const members: number[][] = Array.from({ length: groups }, () => []);
+  for (const i of byDecreasingSize) {
+    let g = 0;
+    for (let h = 1; h < groups; h++) if (load[h] < load[g]) g = h;
+    load[g] += sizes[i];
+    members[g].push(i);
+  }
+  for (const m of members) m.sort((a, b) => a - b);
+  return members;
 }
 
 /**
  * scanReturns with the work shared among `groups` after the first levels: once the classes number
- * at least 64 per group, they are cut into `groups` runs of whole classes of about equal size, each
- * refined on its own for all later n (runGroups may run them on worker threads), and the groups'
+ * at least 16 per group and none holds more than 1/groups of the positions in play, they are shared
+ * among `groups` by size (assignClasses), each group refined on its own for all later n (runGroups may run them on worker threads), and the groups'
  * sums are added per level. Return times and every count are exactly those of scanReturns; sums of
  * logarithms agree to rounding (they are added in a different grouping). Levels before the split
  * are reported through onLevel as they finish, later ones after the groups are done.
- * @param classesPerGroup classes per group wanted before splitting (default 64; tests split earlier)
+ * @param classesPerGroup classes per group wanted before splitting (default 16; tests split earlier)
  * @throws RangeError as scanReturns, and for captureLevel (not supported here)
  */
 export async function scanReturnsSplit(
@@ -207,27 +233,26 @@ export async function scanReturnsSplit(
       [words, nextWords] = [nextWords, words];
     }
     finish(n, sums, activeLength);
-    split = groups > 1 && activeLength > 0 && sums.classes >= classesPerGroup * groups;
+    // The largest class is only looked for once there are classes enough (one pass over the order).
+    split = groups > 1 && activeLength > 0 && sums.classes >= classesPerGroup * groups && classRuns(order, activeLength).largest * groups <= activeLength;
   }
 
   if (split && n <= maxN) {
-    const bounds = groupBounds(order, activeLength, groups);
-    const tasks: ScanGroupTask[] = [];
-    for (let g = 0; g < groups; g++) {
-      const [from, to] = [bounds[g], bounds[g + 1]];
-      tasks.push({
-        symbols,
-        alphabetSize,
-        firstN: n,
-        maxN,
-        order: order.slice(from, to),
-        words: packed ? words.slice(from, to) : new Uint16Array(0),
-        batchLength,
-        batchCount,
-        stride,
-        matchWindow,
-      });
-    }
+    const runs = classRuns(order, activeLength);
+    const sizes = runs.ends.map((e, i) => e - runs.starts[i]);
+    const tasks: ScanGroupTask[] = assignClasses(sizes, groups).map((members) => {
+      let length = 0;
+      for (const i of members) length += sizes[i];
+      const groupOrder = new Int32Array(length);
+      const groupWords = new Uint16Array(packed ? length : 0);
+      let at = 0;
+      for (const i of members) {
+        groupOrder.set(order.subarray(runs.starts[i], runs.ends[i]), at);
+        if (packed) groupWords.set(words.subarray(runs.starts[i], runs.ends[i]), at);
+        at += sizes[i];
+      }
+      return { symbols, alphabetSize, firstN: n, maxN, order: groupOrder, words: groupWords, batchLength, batchCount, stride, matchWindow };
+    });
     // The whole-sequence arrays are not needed any more; let them go before the groups allocate
     // (the async function's frame would keep them alive until it returns).
     // eslint-disable-next-line no-useless-assignment
