@@ -45,6 +45,9 @@ export function engineBytesPerPosition(alphabetSize: number): number {
  * string and a Map slot are a few dozen bytes) plus the Float64 count and the engine's counters. */
 const BYTES_PER_ALPHABET_SYMBOL = 96;
 export const DEFAULT_BASE_BYTES = 64 * 1024 * 1024;
+/** Each worker thread's own V8 instance and compiled code (measured about 12-20 MB resident per
+ * thread of the command line at 10^6 symbols, DEVELOPERS.md). */
+const THREAD_BYTES = 16 * 1024 * 1024;
 
 /**
  * Peak memory of a run, from the sizes the engine allocates (read from scanReturns and the reader):
@@ -69,7 +72,7 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
   const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
   const pathBytes = 256 * maxN * 16;
-  const smallBytes = maxN * levelBytes * threads + pathBytes + alphabetSize * BYTES_PER_ALPHABET_SYMBOL;
+  const smallBytes = maxN * levelBytes * threads + pathBytes + alphabetSize * BYTES_PER_ALPHABET_SYMBOL + (threads > 1 ? threads * THREAD_BYTES : 0);
   const baseBytes = input.baseBytes ?? DEFAULT_BASE_BYTES;
   return { totalBytes: symbolsBytes + engineBytes + smallBytes + baseBytes, symbolsBytes, engineBytes, smallBytes, baseBytes };
 }
