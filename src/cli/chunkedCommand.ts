@@ -32,7 +32,7 @@ export function chunkSizeOption(values: Values): number | undefined {
 export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSettings, size: number, values: Values, io: CliIo, emit: Emit): Promise<void> {
   const { sequence } = loaded;
   const N = sequence.symbols.length;
-  const plan = chunkPlan(N, size, settings.maxN, undefined);
+  const plan = chunkPlan(N, size, settings.maxN);
   if (values.plan === true) {
     io.stdout.write(`${JSON.stringify({ symbols: N, chunkSize: plan.chunkSize, parts: plan.chunkCount })}\n`);
     return;
