@@ -36,7 +36,7 @@ for (const c of CASES) {
   for (const N of sizes) {
     const file = await benchFile(c.spec, N);
     const t0 = performance.now();
-    const run = spawnSync(process.execPath, ['bin/returnrate.mjs', 'analyze', file, '--format', 'chars', '--max-n', String(maxN), '--quiet', '--timing'], {
+    const run = spawnSync(process.execPath, ['bin/returnrate.mjs', 'analyze', file, '--format', 'chars', '--max-n', String(maxN), '--threads', '1', '--quiet', '--timing'], {
       encoding: 'utf8',
       maxBuffer: 1 << 26,
     });
@@ -74,3 +74,6 @@ const header = ['source', 'N', 'wall s', 'read s', 'analysis s', 'M position-lev
 const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
 console.log(`\nreturn-time engine, maxN = ${maxN}, one thread, end to end from the command line`);
 for (const r of [header, ...rows]) console.log(r.map((cell, i) => (cell ?? '').padEnd(widths[i]!)).join('  '));
+
+// Threads, chunks and the memory estimate (issue 6): BENCH_SCALE=0 skips them.
+if (process.env.BENCH_SCALE !== '0') await import('./bench-scale');

@@ -20,3 +20,17 @@ await build({
   // Some bundled CommonJS packages call require(); give the ES module one.
   banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
 });
+
+// The worker thread of `analyze --threads W`, loaded beside the bundle (src/cli/scanThreads.ts).
+await build({
+  absWorkingDir: root,
+  entryPoints: ['src/cli/scanWorker.ts'],
+  outfile: 'dist-cli/scanWorker.mjs',
+  bundle: true,
+  platform: 'node',
+  format: 'esm',
+  target: 'node20',
+  sourcemap: true,
+  logLevel: 'warning',
+  banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
+});

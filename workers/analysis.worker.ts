@@ -1,6 +1,6 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, createDigestingReader, lengthRowOfLevel, longestSegment } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
+import { adviseMemory, analyzeSequence, analyzeSequenceSplit, createDigestingReader, lengthRowOfLevel, longestSegment, memoryAdviceMessage } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, GroupRunner, InputSummary, LengthRow, LevelStats, ReadResult, ReaderOptions, ScanGroupResult, ScanGroupTask, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
@@ -74,6 +74,67 @@ function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: S
   return { sequence: longest.sequence, warnings: [...read.warnings, { code: 'segment-analysed', message }] };
 }
 
+/**
+ * The page's memory budget. A page cannot learn how much memory its worker may take (typed arrays
+ * lie outside the JS heap that performance.memory describes), so the rule is a fixed 4 GiB: a
+ * 64-bit browser tab holds that, and it takes 10^8 binary symbols (about 1.4 GB) with room to spare.
+ */
+const PAGE_MEMORY_BUDGET = 4 * 2 ** 30;
+
+/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget. */
+function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
+  const input = { symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN };
+  const message = memoryAdviceMessage(adviseMemory(input, PAGE_MEMORY_BUDGET), PAGE_MEMORY_BUDGET, 'a fixed budget', 'page');
+  if (message !== null) throw new RangeError(message);
+}
+
+/** From this many symbols on, a cross-origin isolated page shares the scan among sub-workers. */
+const SPLIT_FROM_SYMBOLS = 1_000_000;
+
+/** One sub-worker per group; each ends when it has answered (or with this worker). */
+const subWorkerRunner: GroupRunner = (tasks) =>
+  Promise.all(
+    tasks.map(
+      (task: ScanGroupTask) =>
+        new Promise<ScanGroupResult>((resolve, reject) => {
+          const worker = new Worker(new URL('./scanGroup.worker.ts', import.meta.url), { type: 'module' });
+          worker.onmessage = (event: MessageEvent<ScanGroupResult>) => {
+            resolve(event.data);
+            worker.terminate();
+          };
+          worker.onerror = (event) => reject(new Error(`a scan sub-worker failed: ${event.message}`));
+          worker.postMessage(task, [task.order.buffer, task.words.buffer]);
+        }),
+    ),
+  );
+
+/**
+ * The analysis on one worker, or shared among navigator.hardwareConcurrency sub-workers when the
+ * page is cross-origin isolated (SharedArrayBuffer needs it: COOP/COEP headers, vite.config.ts) and
+ * the sequence has at least 10^6 symbols. Without isolation a note says why one worker ran.
+ */
+async function analyzeOnWorkers(
+  sequence: Sequence,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  hooks: AnalysisHooks,
+): Promise<AnalysisResult> {
+  const cores = navigator.hardwareConcurrency || 1;
+  if (cores < 2 || sequence.symbols.length < SPLIT_FROM_SYMBOLS) return analyzeSequence(sequence, input, settings, hooks);
+  if (!self.crossOriginIsolated) {
+    const result = analyzeSequence(sequence, input, settings, hooks);
+    const note = {
+      code: 'one-worker',
+      message: 'The page is not cross-origin isolated (served without the COOP/COEP headers), so the analysis ran on one worker instead of sharing it among the processor cores.',
+    };
+    return { ...result, warnings: [...result.warnings, note] };
+  }
+  const symbols = sequence.symbols;
+  const shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
+  shared.set(symbols);
+  return analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, subWorkerRunner, hooks);
+}
+
 function release(callback: ProgressCallback): void {
   (callback as Partial<Record<typeof releaseProxy, () => void>>)[releaseProxy]?.();
 }
@@ -85,8 +146,9 @@ const api = {
       const { name, ...readerOptions } = options;
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
       const { sequence, warnings } = symbolizedPart(read, readerOptions);
+      checkMemory(sequence, settings);
       const summary = { name, sha256: read.sha256, format: readerOptions.format, ...(read.symbolization === undefined ? {} : { symbolization: read.symbolization }) };
-      const result = analyzeSequence(sequence, summary, settings, levelHooks(settings, onProgress));
+      const result = await analyzeOnWorkers(sequence, summary, settings, levelHooks(settings, onProgress));
       return warnings.length === 0 ? result : { ...result, warnings: [...warnings, ...result.warnings] };
     } finally {
       release(onProgress);

@@ -1,8 +1,11 @@
 import { basename } from 'node:path';
-import { ANALYSIS_SET_SCHEMA, analyzeSequence, parseSourceSpec, recordSequences } from '../core';
-import type { AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, SymbolizationRecord } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, analyzeSequenceSplit, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
+import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
+import { checkMemory, fitsMemory } from './memoryBudget';
+import { sharedSymbols, threadRunner, threadsOption } from './scanThreads';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -114,6 +117,13 @@ function progressLine(io: CliIo, values: Values, maxN: number, started: number):
   };
 }
 
+/** A result's JSON, summary, figures and report, as `analyze` writes them (also for chunked runs and `merge`). */
+export async function emitAnalysis(result: AnalysisResult, values: Values, io: CliIo): Promise<void> {
+  await emit(result, [result], values, io);
+  if (values.figures !== undefined) await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
+  if (values.report !== undefined) await writeReport(result, String(values.report));
+}
+
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
   const options = settingsFrom(values);
@@ -123,19 +133,46 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   if (loaded.separate !== null && calibrate !== undefined) throw new UsageError('--calibrate works on one sequence, not with --fasta-records separate');
   if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
+  const chunk = chunkSizeOption(values);
+  const N = loaded.sequence.symbols.length;
+  const need = { symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null };
+  // Chunked runs scan one chunk at a time on one thread; the default thread count yields to memory.
+  let threads = chunk === undefined ? threadsOption(values, N) : 1;
+  if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;
+  checkMemory({ ...need, threads }, values);
+  if (chunk !== undefined) {
+    const started = performance.now();
+    await chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
+    if (values.timing === true) {
+      const timing = {
+        symbols: N,
+        readSeconds: loaded.readSeconds,
+        analysisSeconds: (performance.now() - started) / 1000,
+        peakRssBytes: process.resourceUsage().maxRSS * 1024,
+        threads: 1,
+        estimatedPeakBytes: estimatePeakMemory({ ...need, threads: 1 }).totalBytes,
+      };
+      io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
+    }
+    return;
+  }
   const t1 = performance.now();
   // A position-level is one position still in play at one n: N at n = 1, then what each level leaves.
   let positionLevels = loaded.sequence.symbols.length;
   let lastActive = 0;
   const progress = progressLine(io, values, settings.maxN, t1);
-  const result = analyzeSequence(loaded.sequence, loaded.input, settings, {
+  const hooks: AnalysisHooks = {
     onLevel: (n, active) => {
       positionLevels += active;
       lastActive = active;
       progress?.(n, active);
     },
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
-  });
+  };
+  const result =
+    threads > 1
+      ? await analyzeSequenceSplit({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, threads, threadRunner, hooks)
+      : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   const calibration =
@@ -156,6 +193,8 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
       analysisSeconds,
       positionLevels: positionLevels - lastActive,
       peakRssBytes: process.resourceUsage().maxRSS * 1024,
+      threads,
+      estimatedPeakBytes: estimatePeakMemory({ ...need, threads }).totalBytes,
     };
     io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
   }

@@ -1,8 +1,9 @@
 import type { Writable } from 'node:stream';
 import { parseArgs } from 'node:util';
 import { PROGRAM_VERSION, SOURCE_SPEC_FORMS } from '../core';
-import { analyzeCommand } from './analyzeCommand';
+import { analyzeCommand, emitAnalysis } from './analyzeCommand';
 import { compareCommand } from './compareCommand';
+import { mergeCommand } from './chunkedCommand';
 import { describeFailure } from './failure';
 import { generateCommand } from './generateCommand';
 import { ANALYSIS_OPTIONS, READ_OPTIONS } from './options';
@@ -27,6 +28,7 @@ usage
                      (FILE_B | --source-b SPEC --length-b L [--seed-b S]) [options]
                              cross entropy rate of A against B from waiting times, the entropy
                              rate of A, and the relative entropy rate, each with its interval
+  returnrate merge PART... [--json PATH|-] [--figures DIR] [--report PATH.html] [--no-table] [--quiet]
 
 reading options
   -f, --format chars|tokens|fasta|csv|bytes|numbers   default: by extension, else tokens when
@@ -65,6 +67,19 @@ analysis options
                              at this N, and h corrected by the bias (two worker threads; R analyses)
       --calibrate-seed S     base seed of the surrogates (default 1)
       --timing               print timing and peak memory as one JSON line on standard error
+      --threads W            share the scan among W worker threads after the first block lengths
+                             (default: the number of cores from 1e6 symbols on, fewer when memory
+                             is short; results equal the one-thread run)
+      --max-memory SIZE      refuse runs whose estimated peak memory exceeds SIZE (e.g. 2G, 512M;
+                             default 90% of the machine's or container's memory) and say what fits
+
+chunked runs (merged exactly; returns are censored at chunk ends, block frequencies are per chunk)
+      --chunk SIZE           analyse consecutive chunks of SIZE symbols (rounded up to the batch
+                             grid) one after another and merge their statistics
+      --plan                 with --chunk: print {"symbols", "chunkSize", "parts"} and stop
+      --parts-out DIR        with --chunk: write part files (returnrate.part/1) instead of a result
+      --part I               with --parts-out: only part I (0-based), e.g. one task of a job array
+  returnrate merge PART...   merges the part files of one input into the usual result
 
 reference sources (SPEC / SOURCE)
   ${SOURCE_SPEC_FORMS.join('\n  ')}
@@ -86,6 +101,12 @@ const OPTIONS = {
   progress: { type: 'boolean' },
   calibrate: { type: 'string' },
   'calibrate-seed': { type: 'string' },
+  chunk: { type: 'string' },
+  plan: { type: 'boolean' },
+  'parts-out': { type: 'string' },
+  'max-memory': { type: 'string' },
+  threads: { type: 'string' },
+  part: { type: 'string' },
   source: { type: 'string' },
   length: { type: 'string', short: 'l' },
   seed: { type: 'string', short: 's' },
@@ -166,8 +187,9 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
     return;
   }
   if ((command === 'analyze' || command === 'returns') && target !== undefined) context.file = target;
-  if (rest.length > (command === 'compare' ? 1 : 0)) throw new UsageError(`unexpected argument "${rest[command === 'compare' ? 1 : 0]}"`);
   const v = values as Record<string, string | boolean | undefined>;
+  if (command === 'merge') return mergeCommand(positionals.slice(1), (r) => emitAnalysis(r, v, io));
+  if (rest.length > (command === 'compare' ? 1 : 0)) throw new UsageError(`unexpected argument "${rest[command === 'compare' ? 1 : 0]}"`);
   switch (command) {
     case 'analyze':
       return analyzeCommand(target, v, io);
@@ -178,7 +200,7 @@ async function dispatch(argv: readonly string[], io: CliIo, context: RunContext)
     case 'compare':
       return compareCommand(target, rest[0], v, io);
     default:
-      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate, compare`);
+      throw new UsageError(`unknown command "${command}"; the commands are analyze, returns, generate, compare, merge`);
   }
 }
 

@@ -108,10 +108,15 @@ export function analyzeSequence(
   settings: AnalysisSettings,
   hooks: AnalysisHooks = {},
 ): AnalysisResult {
-  const N = sequence.symbols.length;
-  validateSettings(settings, N);
+  validateSettings(settings, sequence.symbols.length);
+  const scan = scanReturns(sequence.symbols, sequence.alphabet.length, scanOptionsOf(settings, hooks));
+  return analyzeScannedSequence(sequence, scan, input, settings, hooks);
+}
+
+/** The scan options of an analysis: maxN, the path sample size and the hooks. */
+export function scanOptionsOf(settings: AnalysisSettings, hooks: AnalysisHooks): ScanOptions {
   const { onLevel, onLevelStats } = hooks;
-  const options: ScanOptions = {
+  return {
     maxN: settings.maxN,
     ...(hooks.pathSamples === undefined ? {} : { sampleTarget: hooks.pathSamples }),
     ...(onLevel === undefined && onLevelStats === undefined
@@ -124,11 +129,23 @@ export function analyzeSequence(
         }),
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
   };
-  const scan = scanReturns(sequence.symbols, sequence.alphabet.length, options);
+}
+
+/**
+ * The analysis of a sequence whose scan is done (by scanReturns here, or shared among workers):
+ * the estimates from the scan, then the diagnostics from the symbols.
+ */
+export function analyzeScannedSequence(
+  sequence: Sequence,
+  scan: ReturnScan,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  hooks: AnalysisHooks = {},
+): AnalysisResult {
   const listed = alphabetSummary(sequence);
   const summary: InputSummary = {
     ...input,
-    symbols: N,
+    symbols: sequence.symbols.length,
     alphabetSize: sequence.alphabet.length,
     alphabet: listed.symbols,
     alphabetUnlisted: listed.unlisted,

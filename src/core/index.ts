@@ -140,3 +140,15 @@ export type { ComparisonResult, ComparisonRow, ComparisonInput, ComparisonExact,
 export { crossReferenceOfSpecs, transitionRowsOfSpec } from './cross/crossReferenceOfSpecs';
 export { markovCrossFacts } from './sources/markovCrossEntropy';
 export type { MarkovCrossFacts } from './sources/markovCrossEntropy';
+// Chunked runs and part files (mergeable per-level statistics)
+export { chunkPlan, chunkBounds, mergedPositions, scanChunk, scanChunked, mergeScanParts } from './returns/chunkedScan';
+export type { ChunkPlan, ScanPart, ChunkHooks } from './returns/chunkedScan';
+export { mergeLevelStats, mergeSampledPaths } from './returns/mergeLevels';
+export { PART_SCHEMA, PartFileError, partFileJson, readPartFile, checkPartsAgree } from './result/partFile';
+export type { PartFacts, PartFileContents } from './result/partFile';
+export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';
+export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
+export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
+export { scanReturnsSplit, scanGroup, classRuns, assignClasses } from './returns/splitScan';
+export type { ScanGroupTask, ScanGroupResult, GroupRunner } from './returns/splitScan';
+export { analyzeSequenceSplit } from './analyzeSplit';

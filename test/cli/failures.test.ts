@@ -90,7 +90,7 @@ describe('returnrate refuses bad input with one line naming the problem and its 
     expect(option.code).toBe(2);
     expect(failureLine(option)).toBe("returnrate: unknown option '--bogus' (see returnrate --help)");
     expect(command.code).toBe(2);
-    expect(failureLine(command)).toBe('returnrate: unknown command "frobnicate"; the commands are analyze, returns, generate, compare (see returnrate --help)');
+    expect(failureLine(command)).toBe('returnrate: unknown command "frobnicate"; the commands are analyze, returns, generate, compare, merge (see returnrate --help)');
   });
 
   it('--unit furlong and --interval -1: usage errors naming the option, what it takes and the value', async () => {

@@ -24,6 +24,11 @@ export interface ScanOptions {
   readonly shouldStop?: () => boolean;
   /** Keep the forward return of every position at this one block length (see ReturnScan.captured). */
   readonly captureLevel?: number;
+  /** Positions per fine batch (a power of two), overriding batchTarget: chunked runs use the whole
+   * sequence's batch length so that their batches line up (chunkedScan.ts). */
+  readonly batchLength?: number;
+  /** Sampling stride of the paths (a power of two), overriding sampleTarget, for the same reason. */
+  readonly sampleStride?: number;
 }
 
 /**
@@ -47,10 +52,14 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) {
     throw new RangeError(`alphabetSize must be a positive integer; got ${alphabetSize}`);
   }
-  const batchLength = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
+  const batchLength = options.batchLength ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
+  const strideGiven = options.sampleStride;
+  if (!isPowerOfTwo(batchLength) || (strideGiven !== undefined && !isPowerOfTwo(strideGiven))) {
+    throw new RangeError(`batchLength and sampleStride must be powers of two; got ${batchLength} and ${String(strideGiven)}`);
+  }
   const batchShift = Math.log2(batchLength);
   const batchCount = Math.ceil(N / batchLength);
-  const stride = powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
+  const stride = strideGiven ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
   const strideShift = Math.log2(stride);
   const sampleCount = Math.ceil(N / stride);
   const matchWindow = options.matchWindow ?? matchWindowFor(N);
@@ -156,7 +165,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
  * gathered in class order: one random read per entry instead of perWord, and independent reads, so
  * the processor overlaps their cache misses. `spare` is overwritten.
  */
-function refreshWords(
+export function refreshWords(
   symbols: SymbolArray,
   offset: number,
   bits: number,
@@ -181,8 +190,12 @@ function refreshWords(
   }
 }
 
+function isPowerOfTwo(x: number): boolean {
+  return Number.isInteger(x) && x >= 1 && x <= 2 ** 30 && (x & (x - 1)) === 0;
+}
+
 /** Sums of a level before any return is added. */
-function emptySums(bins: number, batchCount: number): LevelSums {
+export function emptySums(bins: number, batchCount: number): LevelSums {
   return {
     classes: 0,
     sumCountLogCount: 0,
@@ -201,7 +214,7 @@ function emptySums(bins: number, batchCount: number): LevelSums {
 }
 
 /** Entries never reached were unique blocks (censored, count 1) or lie past the end (0). */
-function completePaths(
+export function completePaths(
   paths: Float64Array,
   counts: Float64Array,
   N: number,
@@ -226,7 +239,7 @@ function completePaths(
 }
 
 /** One level's LevelStats from its sums; the batch sums are laid out one array per quantity. */
-function levelFromSums(n: number, positions: number, sums: LevelSums, singletons: number, batchCount: number): LevelStats {
+export function levelFromSums(n: number, positions: number, sums: LevelSums, singletons: number, batchCount: number): LevelStats {
   const batchObserved = new Float64Array(batchCount);
   const batchSumLog = new Float64Array(batchCount);
   const batchSumLog2 = new Float64Array(batchCount);

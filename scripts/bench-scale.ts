@@ -1,0 +1,82 @@
+// Scale part of the benchmark (issue 6), run after the one-thread table by `npm run bench` or alone:
+//   node scripts/build-cli.mjs && npx tsx scripts/bench-scale.ts
+// 1. throughput with 1 and 2 worker threads and the parallel efficiency T1 / (2 T2) (target >= 80%);
+// 2. a chunked run (BENCH_CHUNK, default 1e6) against the unchunked one on the Markov chain;
+// 3. the memory estimate (estimatePeakMemory) against the measured peak resident size.
+// Sizes: BENCH_SCALE_SIZES (default 1e6,1e7). Files are the cached ones of scripts/bench.ts.
+import { spawnSync } from 'node:child_process';
+import { readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { benchFile } from './benchFiles';
+
+interface Timing {
+  symbols: number;
+  analysisSeconds: number;
+  peakRssBytes: number;
+  threads: number;
+  estimatedPeakBytes: number;
+}
+interface Estimate {
+  estimate: number | null;
+  ci95: [number, number] | null;
+  lengthsUsed: [number, number];
+}
+interface Result {
+  entropy: { estimate: number; ci95: [number, number]; method: string; alternatives: Record<string, Estimate> };
+  trustedRange: { lo: number; hi: number } | null;
+}
+
+const sizes = (process.env.BENCH_SCALE_SIZES ?? '1e6,1e7').split(',').map(Number);
+const chunk = Number(process.env.BENCH_CHUNK ?? '1e6');
+const maxN = 40;
+const CASES = [
+  { label: 'fair coin', spec: 'coin' },
+  { label: 'Markov [[.9,.1],[.4,.6]]', spec: 'markov:0.9,0.1;0.4,0.6' },
+];
+
+function run(file: string, extra: string[], json?: string): Timing {
+  const args = ['bin/returnrate.mjs', 'analyze', file, '--format', 'chars', '--max-n', String(maxN), '--quiet', '--timing', ...extra];
+  if (json !== undefined) args.push('--json', json);
+  const p = spawnSync(process.execPath, args, { encoding: 'utf8', maxBuffer: 1 << 26 });
+  const line = p.stderr.split('\n').find((l) => l.startsWith('timing '));
+  if (p.status !== 0 || line === undefined) throw new Error(`run failed: ${p.stderr.trim().split('\n').pop() ?? ''}`);
+  return JSON.parse(line.slice('timing '.length)) as Timing;
+}
+
+const mb = (b: number): string => (b / 1e6).toFixed(0);
+console.log(`\nscale (issue 6), maxN = ${maxN}; load average now ${readFileSync('/proc/loadavg', 'utf8').split(' ')[0] ?? '?'}`);
+console.log('source | N | T1 s | T2 s | efficiency T1/(2 T2) | estimate MB (1 thread) | peak MB | estimate/peak');
+for (const c of CASES) {
+  for (const N of sizes) {
+    const file = await benchFile(c.spec, N);
+    const one = run(file, ['--threads', '1']);
+    const two = run(file, ['--threads', '2']);
+    const efficiency = one.analysisSeconds / (2 * two.analysisSeconds);
+    const ratio = one.estimatedPeakBytes / one.peakRssBytes;
+    console.log(
+      [c.label, N.toExponential(0), one.analysisSeconds.toFixed(2), two.analysisSeconds.toFixed(2), `${(100 * efficiency).toFixed(0)}%${efficiency >= 0.8 ? ' ok' : ' MISSED'}`,
+        mb(one.estimatedPeakBytes), mb(one.peakRssBytes), `${ratio.toFixed(2)}${Math.abs(ratio - 1) <= 0.2 ? ' ok' : ' MISSED'}`].join(' | '),
+    );
+    console.log(`  2 threads: estimate ${mb(two.estimatedPeakBytes)} MB, peak ${mb(two.peakRssBytes)} MB`);
+  }
+}
+
+const N = Math.max(...sizes);
+const file = await benchFile(CASES[1]!.spec, N);
+const dir = tmpdir();
+const whole = join(dir, 'returnrate-bench-unchunked.json');
+const parts = join(dir, 'returnrate-bench-chunked.json');
+const tw = run(file, ['--threads', '1'], whole);
+const tc = run(file, ['--chunk', String(chunk)], parts);
+const [a, b] = [whole, parts].map((f) => JSON.parse(readFileSync(f, 'utf8')) as Result) as [Result, Result];
+console.log(`\nchunked (--chunk ${chunk}) against unchunked, Markov chain, N = ${N.toExponential(0)} (exact h = 0.394669 nat)`);
+console.log(`  time: unchunked ${tw.analysisSeconds.toFixed(2)} s, chunked ${tc.analysisSeconds.toFixed(2)} s; peak ${mb(tw.peakRssBytes)} MB against ${mb(tc.peakRssBytes)} MB`);
+const show = (r: Result): string => `${r.entropy.estimate.toFixed(5)} [${r.entropy.ci95.map((x) => x.toFixed(5)).join(', ')}] (${r.entropy.method}), range ${r.trustedRange?.lo}..${r.trustedRange?.hi}`;
+console.log(`  headline: unchunked ${show(a)}`);
+console.log(`            chunked   ${show(b)}`);
+for (const key of Object.keys(a.entropy.alternatives)) {
+  const [x, y] = [a.entropy.alternatives[key]!, b.entropy.alternatives[key]!];
+  const d = x.estimate !== null && y.estimate !== null ? (y.estimate - x.estimate).toFixed(5) : '-';
+  console.log(`  ${key}: ${x.estimate?.toFixed(5)} (n ${x.lengthsUsed.join('-')}) against ${y.estimate?.toFixed(5)} (n ${y.lengthsUsed.join('-')}), chunked - unchunked = ${d}`);
+}

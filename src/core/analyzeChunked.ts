@@ -1,0 +1,70 @@
+import { analyzeFromScan, validateSettings, type AnalysisHooks } from './analyze';
+import type { AnalysisResult, AnalysisSettings, InputSummary } from './result/analysisResult';
+import { alphabetSummary } from './result/alphabetSummary';
+import { checkPartsAgree, type PartFileContents } from './result/partFile';
+import { chunkPlan, mergeScanParts, scanChunked, type ChunkPlan } from './returns/chunkedScan';
+import type { ReturnScan } from './returns/levelStats';
+import type { Sequence } from './sequence/sequence';
+
+/** The warning every chunked result carries: what the one approximation of a chunked run is. */
+export function chunkedWarning(plan: ChunkPlan): { code: string; message: string } {
+  return {
+    code: 'chunked',
+    message:
+      `Analysed as ${plan.chunkCount} chunk(s) of ${plan.chunkSize} symbols (the last takes the remainder), merged: ` +
+      `returns that would reach into another chunk are censored at the chunk's end, and block frequencies are each chunk's own. ` +
+      `Returns longer than about ${Math.floor(plan.chunkSize / 2)} symbols are therefore not seen.`,
+  };
+}
+
+function withChunkWarning(result: AnalysisResult, plan: ChunkPlan): AnalysisResult {
+  return plan.chunkCount === 1 ? result : { ...result, warnings: [...result.warnings, chunkedWarning(plan)] };
+}
+
+/**
+ * analyzeSequence in chunks of `chunkSize` symbols (rounded up to the batch grid; see chunkPlan),
+ * merged exactly: memory is that of one chunk's scan besides the symbols.
+ * @throws RangeError for invalid settings or chunk size
+ */
+export function analyzeSequenceChunked(
+  sequence: Sequence,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  chunkSize: number,
+  hooks: AnalysisHooks = {},
+): AnalysisResult {
+  const N = sequence.symbols.length;
+  validateSettings(settings, N);
+  const plan = chunkPlan(N, chunkSize, settings.maxN, hooks.pathSamples);
+  const { onLevel, onLevelStats } = hooks;
+  const scan = scanChunked(sequence.symbols, sequence.alphabet.length, plan, {
+    onLevel: (level, active) => {
+      onLevel?.(level.n, active);
+      onLevelStats?.(level, active);
+    },
+    ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
+  });
+  const listed = alphabetSummary(sequence);
+  const summary: InputSummary = {
+    ...input,
+    symbols: N,
+    alphabetSize: sequence.alphabet.length,
+    alphabet: listed.symbols,
+    alphabetUnlisted: listed.unlisted,
+  };
+  const result = analyzeFromScan(scan, summary, settings, hooks.reference === undefined ? {} : { reference: hooks.reference });
+  return withChunkWarning(result, plan);
+}
+
+/**
+ * The analysis of a complete set of part files (any order, made anywhere).
+ * @param names the files' names for the messages
+ * @throws PartFileError when the parts disagree; RangeError when one is missing or repeated
+ */
+export function analyzeParts(contents: readonly PartFileContents[], names: readonly string[]): { result: AnalysisResult; scan: ReturnScan } {
+  checkPartsAgree(contents, names);
+  const first = contents[0];
+  const scan = mergeScanParts(contents.map((c) => c.part));
+  const result = analyzeFromScan(scan, first.input, first.settings);
+  return { result: withChunkWarning(result, first.part.plan), scan };
+}

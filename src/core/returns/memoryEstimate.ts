@@ -1,0 +1,128 @@
+import { histogramBinCount, powerOfTwoAtLeast } from './scanLayout';
+
+/** What the peak memory of a run depends on. */
+export interface MemoryEstimateInput {
+  /** Symbols in the whole sequence. */
+  readonly symbols: number;
+  readonly alphabetSize: number;
+  readonly maxN: number;
+  /** Chunk length of a chunked run (one chunk's scan at a time); null or absent for one scan. */
+  readonly chunkSize?: number | null;
+  /** Scans held at once (worker threads, each with its own share); default 1. */
+  readonly threads?: number;
+  /** What the host costs before any data (the Node process, the page's worker); default 64 MiB,
+   * the resident size of the command line after start-up (measured, DEVELOPERS.md). */
+  readonly baseBytes?: number;
+}
+
+/** Estimated peak memory in bytes, by part. */
+export interface MemoryEstimate {
+  readonly totalBytes: number;
+  /** The symbol ids of the whole sequence (1, 2 or 4 bytes each). */
+  readonly symbolsBytes: number;
+  /** The engine's per-position arrays for the scan(s) held at once. */
+  readonly engineBytes: number;
+  /** Per-level statistics, sampled paths, the alphabet's labels and counts. */
+  readonly smallBytes: number;
+  readonly baseBytes: number;
+}
+
+/** Bytes per symbol id for an alphabet (allocateSymbols). */
+export function bytesPerSymbolId(alphabetSize: number): number {
+  return alphabetSize <= 0x100 ? 1 : alphabetSize <= 0x10000 ? 2 : 4;
+}
+
+/**
+ * Bytes per position of the engine's working arrays (scanReturns): two Int32 order arrays, and either
+ * two Uint16 carried-word arrays (alphabets up to 256) or one scratch symbol array.
+ */
+export function engineBytesPerPosition(alphabetSize: number): number {
+  const packed = alphabetSize <= 0x100 && alphabetSize >= 1;
+  return 8 + (packed ? 4 : bytesPerSymbolId(alphabetSize));
+}
+
+/** Per distinct symbol: its label string and map entry in the reader (from memory: a short V8
+ * string and a Map slot are a few dozen bytes) plus the Float64 count and the engine's counters. */
+const BYTES_PER_ALPHABET_SYMBOL = 96;
+export const DEFAULT_BASE_BYTES = 64 * 1024 * 1024;
+/** Each worker thread's own V8 instance and compiled code (measured about 12-20 MB resident per
+ * thread of the command line at 10^6 symbols, DEVELOPERS.md). */
+const THREAD_BYTES = 16 * 1024 * 1024;
+
+/**
+ * Peak memory of a run, from the sizes the engine allocates (read from scanReturns and the reader):
+ * the symbols of the whole sequence stay alive throughout; each scan held at once adds its
+ * per-position arrays for its positions (a chunk, or a thread's share of N); the per-level statistics
+ * (histogram and four batch arrays, twice while a level is summed) and the sampled paths are small.
+ * Reading peaks lower (symbols plus the growth slack of one array), so it does not set the peak.
+ */
+export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
+  const { symbols: N, alphabetSize, maxN } = input;
+  if (!Number.isInteger(N) || N < 0) throw new RangeError(`symbols must be a whole number >= 0; got ${N}`);
+  if (!Number.isInteger(alphabetSize) || alphabetSize < 1) throw new RangeError(`alphabetSize must be a positive whole number; got ${alphabetSize}`);
+  const threads = input.threads ?? 1;
+  if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be a whole number >= 1; got ${threads}`);
+  const scanned = Math.min(N, input.chunkSize ?? N);
+  // Threads: the symbols are copied once into shared memory, and at the split the groups' slices of
+  // the order and word arrays are made while the whole-sequence arrays still exist (at most twice
+  // the engine's arrays for a moment); after it the groups hold no more than one scan did.
+  const split = threads > 1 ? 2 : 1;
+  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * split;
+  const engineBytes = scanned * engineBytesPerPosition(alphabetSize) * split;
+  const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
+  const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
+  const pathBytes = 256 * maxN * 16;
+  const smallBytes = maxN * levelBytes * threads + pathBytes + alphabetSize * BYTES_PER_ALPHABET_SYMBOL + (threads > 1 ? threads * THREAD_BYTES : 0);
+  const baseBytes = input.baseBytes ?? DEFAULT_BASE_BYTES;
+  return { totalBytes: symbolsBytes + engineBytes + smallBytes + baseBytes, symbolsBytes, engineBytes, smallBytes, baseBytes };
+}
+
+/** What fits a memory budget: the run as asked, or a chunked run, or nothing. */
+export type MemoryAdvice =
+  | { readonly kind: 'fits'; readonly estimate: MemoryEstimate }
+  | { readonly kind: 'chunk'; readonly estimate: MemoryEstimate; readonly chunkSize: number; readonly chunkEstimate: MemoryEstimate }
+  | { readonly kind: 'too-large'; readonly estimate: MemoryEstimate };
+
+/**
+ * Checks a run against a budget; when it does not fit, the largest chunk size (a multiple of 2^16,
+ * at least 4 maxN) whose run does. A smaller maxN is never the advice: the engine's arrays do not
+ * depend on it.
+ */
+export function adviseMemory(input: MemoryEstimateInput, budgetBytes: number): MemoryAdvice {
+  const estimate = estimatePeakMemory(input);
+  if (estimate.totalBytes <= budgetBytes) return { kind: 'fits', estimate };
+  const spare = budgetBytes - (estimate.totalBytes - estimate.engineBytes);
+  const perPosition = engineBytesPerPosition(input.alphabetSize);
+  const step = 1 << 16;
+  const chunkSize = Math.floor(spare / perPosition / step) * step;
+  if (chunkSize < Math.max(step, 4 * input.maxN)) return { kind: 'too-large', estimate };
+  return { kind: 'chunk', estimate, chunkSize, chunkEstimate: estimatePeakMemory({ ...input, chunkSize }) };
+}
+
+/** Bytes as "1.4 GB" (decimal units, two significant digits). */
+export function formatBytes(bytes: number): string {
+  const units = ['bytes', 'kB', 'MB', 'GB', 'TB'];
+  let u = 0;
+  let x = bytes;
+  while (x >= 1000 && u < units.length - 1) {
+    x /= 1000;
+    u++;
+  }
+  return `${u === 0 ? x.toFixed(0) : x.toPrecision(2)} ${units[u]}`;
+}
+
+/**
+ * The one-line refusal for a run that does not fit, with what would.
+ * @param budgetSource where the budget came from, e.g. "--max-memory" or "the machine's memory"
+ * @param host 'page' names the command line's chunked run instead of an option of the page
+ */
+export function memoryAdviceMessage(advice: MemoryAdvice, budgetBytes: number, budgetSource: string, host: 'cli' | 'page' = 'cli'): string | null {
+  if (advice.kind === 'fits') return null;
+  if (host === 'page') {
+    const what = advice.kind === 'chunk' ? `; the command line can run it in chunks (returnrate analyze FILE --chunk ${advice.chunkSize})` : '';
+    return `this run needs about ${formatBytes(advice.estimate.totalBytes)} of memory, more than the page's ${formatBytes(budgetBytes)} (${budgetSource})${what}`;
+  }
+  const need = `this run needs about ${formatBytes(advice.estimate.totalBytes)} but ${formatBytes(budgetBytes)} are available (${budgetSource})`;
+  if (advice.kind === 'too-large') return `${need}; the program and the symbols alone leave no room for a scan`;
+  return `${need}; a chunked run fits: --chunk ${advice.chunkSize} (about ${formatBytes(advice.chunkEstimate.totalBytes)}; returns are then censored at chunk ends)`;
+}
