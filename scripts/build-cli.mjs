@@ -7,8 +7,9 @@ import { fileURLToPath } from 'node:url';
 const root = fileURLToPath(new URL('..', import.meta.url));
 await build({
   absWorkingDir: root,
-  // The calibration's worker thread is a second entry, loaded next to the bundle (runCalibration.ts).
-  entryPoints: { returnrate: 'src/cli/main.ts', 'calibration-thread': 'src/cli/calibrationThread.ts' },
+  // The worker threads of `--calibrate` (runCalibration.ts) and `--threads` (scanThreads.ts) are
+  // entries of their own, loaded next to the bundle.
+  entryPoints: { returnrate: 'src/cli/main.ts', 'calibration-thread': 'src/cli/calibrationThread.ts', scanWorker: 'src/cli/scanWorker.ts' },
   outdir: 'dist-cli',
   outExtension: { '.js': '.mjs' },
   bundle: true,
@@ -21,16 +22,3 @@ await build({
   banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
 });
 
-// The worker thread of `analyze --threads W`, loaded beside the bundle (src/cli/scanThreads.ts).
-await build({
-  absWorkingDir: root,
-  entryPoints: ['src/cli/scanWorker.ts'],
-  outfile: 'dist-cli/scanWorker.mjs',
-  bundle: true,
-  platform: 'node',
-  format: 'esm',
-  target: 'node20',
-  sourcemap: true,
-  logLevel: 'warning',
-  banner: { js: "import { createRequire as __cr } from 'node:module'; const require = __cr(import.meta.url);" },
-});
