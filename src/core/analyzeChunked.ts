@@ -13,7 +13,8 @@ export function chunkedWarning(plan: ChunkPlan): { code: string; message: string
     message:
       `Analysed as ${plan.chunkCount} chunk(s) of ${plan.chunkSize} symbols (the last takes the remainder), merged: ` +
       `returns that would reach into another chunk are censored at the chunk's end, and block frequencies are each chunk's own. ` +
-      `Returns longer than about ${Math.floor(plan.chunkSize / 2)} symbols are therefore not seen.`,
+      `Returns longer than about ${Math.floor(plan.chunkSize / 2)} symbols are therefore not seen. ` +
+      `The mixing diagnostics are not computed: the merged statistics are sums, and the diagnostics need the symbols.`,
   };
 }
 
