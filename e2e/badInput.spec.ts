@@ -1,0 +1,83 @@
+import { expect, test } from '@playwright/test';
+import type { Page } from '@playwright/test';
+import { BROWSER_BAD_INPUTS } from '../test/corpus/badInputs';
+import type { BadInput } from '../test/corpus/badInputs';
+import { collectErrors, screenshot } from './pageWatch';
+
+// The workbench subset of the bad-input corpus (test/corpus/badInputs.ts): each file is dropped on
+// the page like a user's file and run; the page must name the problem in the corpus's words, stay
+// usable, and log no console error. A demo must still run afterwards.
+
+const runButton = (page: Page) => page.getByRole('button', { name: 'Run', exact: true });
+
+async function idleWithEstimate(page: Page, inputName: string): Promise<void> {
+  await expect(page.locator('.input-name')).toHaveText(inputName, { timeout: 60_000 });
+  await expect(page.getByTestId('run-status')).toHaveText('Idle');
+  await expect(page.getByTestId('entropy-interval')).toContainText(/interval: -?\d+\.\d+ to -?\d+\.\d+/);
+}
+
+async function drop(page: Page, kind: BadInput): Promise<void> {
+  const dataTransfer = await page.evaluateHandle(
+    ([bytes, name]) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([Uint8Array.from(bytes)], name));
+      return dt;
+    },
+    [Array.from(kind.bytes()), kind.fileName] as const,
+  );
+  await page.dispatchEvent('.layout', 'drop', { dataTransfer });
+}
+
+test('dropped bad files get a plain message with their place; the page stays usable and a demo still runs', async ({ page }) => {
+  test.setTimeout(240_000);
+  expect(BROWSER_BAD_INPUTS.length).toBeGreaterThanOrEqual(8);
+  const errors = collectErrors(page);
+  await page.goto('/');
+  await idleWithEstimate(page, 'Hill-top station wind sectors (invented)');
+
+  for (const kind of BROWSER_BAD_INPUTS) {
+    await test.step(kind.id, async () => {
+      const want = kind.expect;
+      if (kind.stage === 'session') {
+        await drop(page, kind);
+        const alert = page.getByRole('alert');
+        await expect(alert).toContainText(`Could not open the session “${kind.fileName}”`);
+        if (want.outcome === 'refused') await expect(alert).toContainText(want.message);
+      } else {
+        await page.getByRole('combobox', { name: 'Format' }).selectOption(kind.reader.format);
+        if (kind.reader.format === 'csv') await page.getByRole('textbox', { name: 'CSV column' }).fill(String(kind.reader.column ?? ''));
+        await drop(page, kind);
+        await expect(page.getByTestId('preview').getByRole('heading', { level: 2 })).toContainText(kind.fileName);
+        await runButton(page).click();
+        if (want.outcome === 'refused') {
+          const alert = page.getByRole('alert');
+          await expect(alert).toContainText(kind.fileName);
+          await expect(alert.locator('.alert-message')).toContainText(want.message);
+          if (want.position !== 'whole-input') {
+            const { line, column, byte } = want.position;
+            const place = [line === undefined ? '' : `line ${line}`, column === undefined ? '' : `column ${column}`, byte === undefined ? '' : `byte ${byte}`].filter((s) => s !== '').join(', ');
+            await expect(alert).toContainText(place);
+          }
+          await expect(page.getByTestId('run-status')).toHaveText('Idle');
+        } else {
+          await idleWithEstimate(page, kind.fileName);
+        }
+      }
+      await screenshot(page, `bad-input-${kind.id}`, false);
+      // The page is whole after each: heading, Run button, and a dismissible message.
+      await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+      await expect(runButton(page)).toBeEnabled();
+      const dismiss = page.getByRole('button', { name: 'Dismiss the error message' });
+      if ((await dismiss.count()) > 0) await dismiss.first().click();
+    });
+  }
+
+  // Still usable: a reference source from the gallery runs to an estimate.
+  await page.getByRole('button', { name: 'Choose Fair coin' }).click();
+  await page.getByRole('spinbutton', { name: 'Symbols' }).fill('20000');
+  await runButton(page).click();
+  await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 60_000 });
+  await expect(page.getByTestId('entropy-interval')).toContainText(/interval: -?\d+\.\d+ to -?\d+\.\d+/);
+  await expect(page.locator('.input-name')).toContainText(/coin/i);
+  expect(errors).toEqual([]);
+});
