@@ -81,3 +81,28 @@ test('dropped bad files get a plain message with their place; the page stays usa
   await expect(page.locator('.input-name')).toContainText(/coin/i);
   expect(errors).toEqual([]);
 });
+
+test('data that looks physiological carries the research-estimate caution in the preview and the estimate; other data does not', async ({ page }) => {
+  const errors = collectErrors(page);
+  await page.goto('/');
+  await idleWithEstimate(page, 'Hill-top station wind sectors (invented)');
+  await expect(page.getByTestId('physiological-caution')).toHaveCount(0);
+  // A CSV whose file name says nothing, but whose column is named like a recording: an invented
+  // binary pattern, never a check value.
+  const rows = ['time,ECG_lead_II'];
+  for (let k = 0; k < 600; k++) rows.push(`${k},${(k * 7919) % 5 < 2 ? 'u' : 'd'}`);
+  await page.getByRole('combobox', { name: 'Format' }).selectOption('csv');
+  await page.getByRole('textbox', { name: 'CSV column' }).fill('ECG_lead_II');
+  const dataTransfer = await page.evaluateHandle((text) => {
+    const dt = new DataTransfer();
+    dt.items.add(new File([text], 'session-4.csv'));
+    return dt;
+  }, `${rows.join('\n')}\n`);
+  await page.dispatchEvent('.layout', 'drop', { dataTransfer });
+  await expect(page.getByTestId('preview-physiological-caution')).toContainText('research estimate, not a clinical measurement');
+  await runButton(page).click();
+  await idleWithEstimate(page, 'session-4.csv');
+  await expect(page.getByTestId('physiological-caution')).toContainText('research estimate, not a clinical measurement');
+  await screenshot(page, 'caution-physiological', false);
+  expect(errors).toEqual([]);
+});

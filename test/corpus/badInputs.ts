@@ -107,7 +107,6 @@ function distinctTokens(count: number): Uint8Array {
   return text(parts.join(' '));
 }
 
-const INVALID_UTF8 = /invalid UTF-8/;
 
 export const BAD_INPUTS: readonly BadInput[] = [
   // --- nothing to read ---
