@@ -107,7 +107,6 @@ function distinctTokens(count: number): Uint8Array {
   return text(parts.join(' '));
 }
 
-
 export const BAD_INPUTS: readonly BadInput[] = [
   // --- nothing to read ---
   {

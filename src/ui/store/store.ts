@@ -17,6 +17,7 @@ import { initialSettingsState, restoreSettings, settingsActions } from './settin
 import type { SettingsState } from './settingsSlice';
 import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
+import { keepPartialRows } from './partialRowsKeeper';
 
 export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState;
 /** What slice actions need of a store. */
@@ -144,6 +145,9 @@ export function whenHydrated(then: () => void, store: Pick<typeof appStore, 'per
     });
   }
 }
+
+// The running analysis's rows survive a reload too (marked "interrupted by a reload").
+keepPartialRows(appStore, page.storage, (then) => whenHydrated(then));
 
 /** Selects one field (or a derived value) of the page's store in a component. */
 export function useAppState<T>(selector: (state: AppState) => T): T {
