@@ -1,3 +1,4 @@
+import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
 import type { Page } from '@playwright/test';
 import { BROWSER_BAD_INPUTS } from '../test/corpus/badInputs';
@@ -104,5 +105,54 @@ test('data that looks physiological carries the research-estimate caution in the
   await idleWithEstimate(page, 'session-4.csv');
   await expect(page.getByTestId('physiological-caution')).toContainText('research estimate, not a clinical measurement');
   await screenshot(page, 'caution-physiological', false);
+  expect(errors).toEqual([]);
+});
+
+test('hostile file and symbol names are shown as text in the page and written as text into exported SVG, CSV and the report', async ({ page }) => {
+  const errors = collectErrors(page);
+  const dialogs: string[] = [];
+  page.on('dialog', (d) => {
+    dialogs.push(d.message());
+    void d.dismiss();
+  });
+  const name = '<img src=x onerror=alert(1)>.txt';
+  const tokens = ['"><script>alert(2)</script>', '<img_src=x_onerror=alert(3)>'];
+  // An invented alternation with a period of three, never a check value.
+  const text = Array.from({ length: 3000 }, (_, k) => tokens[k % 3 === 0 ? 0 : 1]).join(' ');
+  await page.goto('/');
+  await idleWithEstimate(page, 'Hill-top station wind sectors (invented)');
+  await page.getByRole('combobox', { name: 'Format' }).selectOption('tokens');
+  const dataTransfer = await page.evaluateHandle(
+    ([content, fileName]) => {
+      const dt = new DataTransfer();
+      dt.items.add(new File([content], fileName));
+      return dt;
+    },
+    [text, name] as const,
+  );
+  await page.dispatchEvent('.layout', 'drop', { dataTransfer });
+  await expect(page.getByTestId('preview').getByRole('heading', { level: 2 })).toHaveText(`Preview of ${name}`);
+  await expect(page.getByTestId('preview').getByRole('region', { name: /Alphabet of the preview/ })).toContainText(tokens[0]!);
+  await runButton(page).click();
+  await idleWithEstimate(page, name);
+  // Nothing was parsed as markup: no image with src x, no script holding the payload, no alert.
+  expect(await page.locator('img[src="x"]').count()).toBe(0);
+  expect(await page.evaluate(() => [...document.scripts].some((s) => s.textContent?.includes('alert(')))).toBe(false);
+
+  const toolbar = page.getByRole('toolbar', { name: /^Export: Convergence/ });
+  const saved = async (button: string): Promise<string> => {
+    const [download] = await Promise.all([page.waitForEvent('download'), toolbar.getByRole('button', { name: button, exact: true }).click()]);
+    return readFileSync((await download.path()) ?? '', 'utf8');
+  };
+  const svg = await saved('Download SVG');
+  expect(svg).not.toMatch(/<img|<script/i);
+  expect(svg).toContain('&lt;img src=x onerror=alert(1)&gt;.txt');
+  const csv = await saved('Download CSV');
+  expect(csv).toContain(`# Input: ${name}`);
+  const [report] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download report' }).click()]);
+  const html = readFileSync((await report.path()) ?? '', 'utf8');
+  expect(html).not.toMatch(/<img|<script/i);
+  expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;.txt');
+  expect(dialogs).toEqual([]);
   expect(errors).toEqual([]);
 });
