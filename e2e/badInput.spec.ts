@@ -137,7 +137,7 @@ test('hostile file and symbol names are shown as text in the page and written as
   await idleWithEstimate(page, name);
   // Nothing was parsed as markup: no image with src x, no script holding the payload, no alert.
   expect(await page.locator('img[src="x"]').count()).toBe(0);
-  expect(await page.evaluate(() => [...document.scripts].some((s) => s.textContent?.includes('alert(')))).toBe(false);
+  expect(await page.evaluate(() => Array.from(document.scripts).some((s) => (s.textContent ?? '').includes('alert(')))).toBe(false);
 
   const toolbar = page.getByRole('toolbar', { name: /^Export: Convergence/ });
   const saved = async (button: string): Promise<string> => {
