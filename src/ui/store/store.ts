@@ -6,7 +6,7 @@ import type { StoreApi } from 'zustand/vanilla';
 import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
 import { memoryStorage } from './memoryStorage';
-import { pageStorage } from './pageStorage';
+import { pageSideStorage, pageStorage } from './pageStorage';
 import { initialResultState, MAX_STORED_RESULT_CHARS, restoreResult, resultActions, resultForStorage } from './resultSlice';
 import type { ResultState } from './resultSlice';
 import { initialRunState, runActions } from './runSlice';
@@ -147,7 +147,7 @@ export function whenHydrated(then: () => void, store: Pick<typeof appStore, 'per
 }
 
 // The running analysis's rows survive a reload too (marked "interrupted by a reload").
-keepPartialRows(appStore, page.storage, (then) => whenHydrated(then));
+keepPartialRows(appStore, pageSideStorage(), (then) => whenHydrated(then));
 
 /** Selects one field (or a derived value) of the page's store in a component. */
 export function useAppState<T>(selector: (state: AppState) => T): T {
