@@ -184,7 +184,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   if (values.figures !== undefined) {
     await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
   }
-  if (values.report !== undefined) await writeReport(result, String(values.report));
+  if (values.report !== undefined) await writeReport(result, String(values.report), values.column === undefined ? [] : [String(values.column)]);
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {

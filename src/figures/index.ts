@@ -31,7 +31,7 @@ export { csvField, csvRecord } from './csvField';
 export { xmlText } from './xmlText';
 export { exportCaption, exportFigures, DEFAULT_EXPORT_VIEW, EXPORT_FIGURE_IDS, EXPORT_SIZE } from './exportFigures';
 export type { ExportFigureId, ExportedFigure, ExportViewOptions } from './exportFigures';
-export { reportHtml, looksPhysiological } from './reportHtml';
+export { reportHtml, looksPhysiological, PHYSIOLOGICAL_CAUTION } from './reportHtml';
 export type { ReportOptions } from './reportHtml';
 export { calibrationFigure, CALIBRATION_STYLES } from './calibrationFigure';
 export type { CalibratedQuantity } from './calibrationFigure';

@@ -10,17 +10,25 @@ export interface ReportOptions {
   readonly date?: string | null;
   /** View options that shape the figures; the workbench's defaults when absent. */
   readonly view?: ExportViewOptions;
+  /** Names of the columns read (CSV), checked by looksPhysiological besides the input's name. */
+  readonly columns?: readonly string[];
 }
 
 /**
  * Input names and formats that suggest a physiological recording. Matching is loose on purpose:
  * a caution shown on a file that is not physiological costs nothing.
  */
-const PHYSIOLOGICAL = /ecg|ekg|eeg|emg|heart|cardi|spike|neuron|neural|pulse|hrv|physio|patient|clinic|blood|respirat|sleep/i;
+const PHYSIOLOGICAL = /ecg|ekg|eeg|emg|heart|cardi|spike|neuron|neural|pulse|hrv|physio|patient|clinic|blood|respirat|sleep|muscle|brain|cortex|axon|bpm/i;
 
-/** True when the input's name or format suggests physiological data (the report then adds a caution). */
-export function looksPhysiological(input: Pick<AnalysisResult['input'], 'name' | 'format'>): boolean {
-  return PHYSIOLOGICAL.test(input.name) || PHYSIOLOGICAL.test(input.format);
+/** The caution shown in the workbench and the report when looksPhysiological is true. */
+export const PHYSIOLOGICAL_CAUTION = 'This looks like a physiological recording. The entropy rate here is a research estimate, not a clinical measurement.';
+
+/**
+ * True when the input's name or format, or the name of a column read from it (CSV header), suggests
+ * physiological data; the workbench and the report then show PHYSIOLOGICAL_CAUTION.
+ */
+export function looksPhysiological(input: Pick<AnalysisResult['input'], 'name' | 'format'>, columns: readonly string[] = []): boolean {
+  return PHYSIOLOGICAL.test(input.name) || PHYSIOLOGICAL.test(input.format) || columns.some((c) => PHYSIOLOGICAL.test(c));
 }
 
 /** Page styles: embedded, system fonts only, so the file works offline; print rules for PDF. */
@@ -215,7 +223,7 @@ function cautionsSection(physiological: boolean): string {
     'The estimators assume a stationary, well-mixing source. Intervals are only as good as the batches are long compared with the dependence in the data; check the figures for plateaus and for departures from the limit laws.',
     'A finite sequence cannot show block lengths whose blocks are all unique; the trusted range and the warnings say where the data stop speaking.',
   ];
-  const note = physiological ? '<p class="report-note" id="physiological-note">This looks like a physiological recording. The entropy rate here is a research estimate, not a clinical measurement.</p>' : '';
+  const note = physiological ? `<p class="report-note" id="physiological-note">${PHYSIOLOGICAL_CAUTION}</p>` : '';
   return `<section id="cautions"><h2>Cautions</h2>${note}<ul class="report-caution">${items.map((i) => `<li>${xmlText(i)}</li>`).join('')}</ul></section>`;
 }
 
@@ -228,7 +236,7 @@ function cautionsSection(physiological: boolean): string {
  */
 export function reportHtml(result: AnalysisResult, options: ReportOptions = {}): string {
   const date = options.date ?? null;
-  const physiological = looksPhysiological(result.input);
+  const physiological = looksPhysiological(result.input, options.columns);
   const body = [
     headerSection(result, date),
     physiological ? '<p class="report-note">Research estimate, not a clinical measurement: see the cautions at the end.</p>' : '',

@@ -28,6 +28,20 @@ export interface AnalysisClient {
   dispose(): void;
 }
 
+/**
+ * The worker died while it was running a call (a crash, running out of memory, killed). The page
+ * says so in these words and keeps the settings and the rows computed so far; Run starts a fresh
+ * worker.
+ */
+export class WorkerStopped extends Error {
+  override readonly name = 'WorkerStopped';
+}
+
+/** The words the page shows for a worker that died; `detail` is what the browser reported, if anything. */
+export function workerStoppedMessage(detail: string): string {
+  return `the analysis stopped unexpectedly (${detail}); the settings and the rows computed so far are kept: press Run to start it again`;
+}
+
 /** Anything with the Worker surface the client uses; tests hand in a fake. */
 export type WorkerLike = Pick<Worker, 'terminate' | 'addEventListener'> & Parameters<typeof wrap>[0];
 
@@ -68,10 +82,11 @@ export function createAnalysisClient(start: () => WorkerLike = startAnalysisWork
     // A worker that fails to load or throws outside a call would leave calls hanging; fail them.
     w.addEventListener('error', (event: Event) => {
       const detail = (event as Partial<ErrorEvent>).message;
-      const message = typeof detail === 'string' && detail !== '' ? detail : 'the worker could not start or stopped unexpectedly';
-      if (worker === w) stop(new Error(`Analysis worker failed: ${message}`));
+      const message = typeof detail === 'string' && detail !== '' ? detail : 'the analysis worker could not start or was stopped';
+      if (worker === w) stop(new WorkerStopped(workerStoppedMessage(message)));
     });
     worker = w;
+    if (import.meta.env.DEV) exposeStopHook(w);
     remote = wrap<AnalysisApi>(w);
     return remote;
   };
@@ -107,5 +122,18 @@ export function createAnalysisClient(start: () => WorkerLike = startAnalysisWork
     analyzeBytes: (bytes, options, settings, c) => call(c, (api, p) => api.analyzeBytes(transfer(bytes, [bytes]), options, settings, p)),
     analyzeDemo: (id, length, seed, settings, c) => call(c, (api, p) => api.analyzeDemo(id, length, seed, settings, p)),
     dispose: () => stop(new DOMException('The analysis worker was shut down.', 'AbortError')),
+  };
+}
+
+/**
+ * Development builds only (the browser tests run on the dev server): `__returnrateStopWorker()` in
+ * the page stops the current analysis worker the way a crash does. A worker's death raises no event
+ * by itself, so the hook terminates it and then raises the 'error' event that a worker failing to
+ * load or throwing outside a call would raise; the client treats both the same.
+ */
+function exposeStopHook(w: WorkerLike): void {
+  (globalThis as { __returnrateStopWorker?: () => void }).__returnrateStopWorker = () => {
+    w.terminate();
+    (w as unknown as EventTarget).dispatchEvent(new ErrorEvent('error', { message: 'the worker was terminated' }));
   };
 }

@@ -14,7 +14,7 @@ describe('returnrate refuses bad input with one line naming the problem and its 
     const path = folder.file('empty.txt', '');
     const run = await cli('analyze', path);
     expect(run.code).toBe(1);
-    expect(failureLine(run)).toBe(`returnrate: ${path}: the file holds no symbols`);
+    expect(failureLine(run)).toBe(`returnrate: ${path}: the file holds no symbols (0 bytes)`);
   });
 
   it('a file of spaces, tabs and line breaks only: exit 1, "only whitespace"', async () => {

@@ -117,6 +117,16 @@ describe('reportHtml', () => {
     expect(html).not.toContain('clinical measurement');
   });
 
+  it('adds the caution for a physiological-looking column name, also when the file name says nothing', () => {
+    for (const name of ['ECG lead II', 'eeg_fz', 'heart_rate', 'spike_times', 'pulse', 'EMG', 'neuron 12']) {
+      expect(looksPhysiological({ name: 'session-4.csv', format: 'csv' }, [name]), name).toBe(true);
+    }
+    expect(looksPhysiological({ name: 'session-4.csv', format: 'csv' }, ['wind_sector', 'time'])).toBe(false);
+    const plain = analyse('session-4.csv');
+    expect(reportHtml(plain)).not.toContain('clinical measurement');
+    expect(byId(parse(reportHtml(plain, { columns: ['EEG Cz'] })), 'physiological-note').textContent).toContain('research estimate, not a clinical measurement');
+  });
+
   it('gives the same bytes for the same result and date, and prints the date', () => {
     expect(reportHtml(result, { date: DATE })).toBe(html);
     expect(byId(doc, 'input-facts').textContent).toContain(DATE);

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { AnalysisResult, LengthRow } from '../../src/core/result/analysisResult';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import type { AnalysisProgress, AnalysisReport } from '../../src/ui/analysisClient';
-import { createAnalysisClient } from '../../src/ui/analysisClient';
+import { WorkerStopped, createAnalysisClient, workerStoppedMessage } from '../../src/ui/analysisClient';
 import type { WorkerLike } from '../../src/ui/analysisClient';
 import { fakeResult, lengthRow } from './fixtures';
 
@@ -112,5 +112,41 @@ describe('analysis client', () => {
     controller.abort();
     await expect(client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: controller.signal })).rejects.toMatchObject({ name: 'AbortError' });
     expect(started).toHaveLength(0);
+  });
+
+  it('a worker that dies during a call rejects it as WorkerStopped in plain words, and the next call starts a new worker', async () => {
+    const result = fakeResult();
+    const { start, started } = fakeWorkers({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
+    const workers: EventTarget[] = [];
+    const client = createAnalysisClient(() => {
+      const w = start();
+      workers.push(w as unknown as EventTarget);
+      return w;
+    });
+    const pending = client.analyzeDemo('hang', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal });
+    // What a browser raises when a worker fails outside a call (a plain Event: Node has no ErrorEvent).
+    workers[0]!.dispatchEvent(Object.assign(new Event('error'), { message: 'out of memory' }));
+    const error: unknown = await pending.catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(WorkerStopped);
+    expect((error as Error).message).toBe(workerStoppedMessage('out of memory'));
+    expect((error as Error).message).toMatch(/^the analysis stopped unexpectedly \(out of memory\); .*press Run to start it again$/);
+    expect(started[0]?.terminated).toBe(true);
+    await expect(client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal })).resolves.toEqual(result);
+    expect(started).toHaveLength(2);
+    client.dispose();
+  });
+
+  it('a worker error without a message still names what happened', async () => {
+    const { start } = fakeWorkers({ analyzeDemo: never });
+    const workers: EventTarget[] = [];
+    const client = createAnalysisClient(() => {
+      const w = start();
+      workers.push(w as unknown as EventTarget);
+      return w;
+    });
+    const pending = client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal });
+    workers[0]!.dispatchEvent(new Event('error'));
+    await expect(pending).rejects.toMatchObject({ name: 'WorkerStopped', message: workerStoppedMessage('the analysis worker could not start or was stopped') });
+    client.dispose();
   });
 });

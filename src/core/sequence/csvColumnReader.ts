@@ -1,5 +1,6 @@
 import { CodeUnitBuffer } from './codeUnitBuffer';
 import { ReadError } from './readError';
+import type { InputPosition } from './readError';
 import type { ReaderOptions } from './sequenceReader';
 import { TextReader } from './textReader';
 
@@ -49,6 +50,9 @@ export class CsvColumnReader extends TextReader {
   private rows = 0;
   private emptyCells = 0;
   private firstEmptyLine = 0;
+  /** Quotes inside unquoted cells of the read column (kept as text, RFC 4180 does not allow them). */
+  private strayQuotes = 0;
+  private firstStrayQuote: InputPosition = {};
   private blankLines = 0;
   private scanPos = 0;
   private scanInQuotes = false;
@@ -147,7 +151,10 @@ export class CsvColumnReader extends TextReader {
           this.endLine(base + k);
         } else {
           if (cp > SPACE) this.rowHasContent = true;
-          if (this.collecting) cell.pushCodePoint(cp);
+          if (this.collecting) {
+            if (cp === QUOTE && this.strayQuotes++ === 0) this.firstStrayQuote = this.positionAt(k, this.line, this.lineStartCp);
+            cell.pushCodePoint(cp);
+          }
         }
       } else if (state === QUOTED) {
         if (cp === QUOTE) {
@@ -186,6 +193,13 @@ export class CsvColumnReader extends TextReader {
     this.details['rows'] = this.rows;
     this.details['emptyCells'] = this.emptyCells;
     this.details['blankLines'] = this.blankLines;
+    if (this.strayQuotes > 0) {
+      const { line, column } = this.firstStrayQuote;
+      this.warnings.push({
+        code: 'csv-stray-quote',
+        message: `kept ${this.strayQuotes} quote${this.strayQuotes === 1 ? '' : 's'} inside unquoted cells as text (first at line ${line}, column ${column}); quote the whole cell and double inner quotes if that is not meant`,
+      });
+    }
     if (this.emptyCells > 0) {
       this.warnings.push({
         code: 'csv-empty-cells',

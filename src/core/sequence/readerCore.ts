@@ -72,7 +72,7 @@ export abstract class ReaderCore implements SequenceReader {
   private assemble(): ReadResult {
     const symbols = this.symbols.toSymbolArray();
     if (symbols.length === 0) {
-      const reason = this.emptyReason();
+      const reason = this.bytesRead === 0 ? '0 bytes' : this.emptyReason();
       throw new ReadError('empty', `the file holds no symbols${reason === '' ? '' : ` (${reason})`}`);
     }
     const result: ReadResult = {

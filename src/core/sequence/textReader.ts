@@ -3,7 +3,7 @@ import type { BinaryEvidence } from './binarySniff';
 import { ReadError } from './readError';
 import type { InputPosition } from './readError';
 import { ReaderCore } from './readerCore';
-import { Utf8Decoder } from './utf8Decoder';
+import { Utf8Decoder, describeInvalidUtf8 } from './utf8Decoder';
 
 /** Bytes decoded per batch, so a huge single chunk never needs a huge code point buffer. */
 const SLICE_BYTES = 1 << 16;
@@ -119,7 +119,7 @@ export abstract class TextReader extends ReaderCore {
     if (stop === 'nul') {
       return new ReadError('binary-in-text', `a NUL byte: this looks like binary data, not UTF-8 text; ${BYTES_HINT}`, position);
     }
-    const what = stop === 'truncated' ? 'the input ends inside a UTF-8 character' : 'invalid UTF-8';
+    const what = stop === 'truncated' ? 'the input ends inside a UTF-8 character' : `invalid UTF-8: ${describeInvalidUtf8(this.decoder.stopLead, this.decoder.stopNext)}`;
     return new ReadError('invalid-utf8', `${what}; save the file as UTF-8, or if it is not text, ${BYTES_HINT}`, position);
   }
 }

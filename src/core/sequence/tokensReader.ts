@@ -47,6 +47,10 @@ export class TokensReader extends TextReader {
     if (this.token.length > 0) this.emitToken();
   }
 
+  protected override emptyReason(): string {
+    return this.bytesRead > 0 ? 'only whitespace and separators' : '';
+  }
+
   private emitToken(): void {
     const token = this.token;
     let id: number;

@@ -21,6 +21,9 @@ export class Utf8Decoder {
   stop: Utf8Stop = 'none';
   /** 0-based byte offset of the stop: the NUL byte or the first byte of the bad sequence. */
   stopByte = -1;
+  /** For an 'invalid' stop: the first byte of the bad sequence and the byte that broke it (-1 when the first byte alone is bad). */
+  stopLead = -1;
+  stopNext = -1;
 
   private bomPending: boolean;
   private bytesSeen = 0;
@@ -70,6 +73,7 @@ export class Utf8Decoder {
           continue;
         }
         this.sequenceStart = base + i;
+        this.stopLead = b;
         if (b >= 0xc2 && b <= 0xdf) {
           needed = 1;
           cp = b & 0x1f;
@@ -84,12 +88,14 @@ export class Utf8Decoder {
           needed = 3;
           cp = b & 0x07;
         } else {
+          this.stopNext = -1;
           this.halt('invalid', base + i);
           break;
         }
         seen = 0;
       } else {
         if (b < lower || b > upper) {
+          this.stopNext = seen === 0 ? b : -2 - b;
           this.halt('invalid', this.sequenceStart);
           break;
         }
@@ -147,6 +153,29 @@ export class Utf8Decoder {
     this.stop = reason;
     this.stopByte = byte;
   }
+}
+
+const hex = (b: number): string => `0x${b.toString(16).toUpperCase().padStart(2, '0')}`;
+
+/**
+ * Why the bytes at an 'invalid' stop are not UTF-8, in words, from the rows of the Unicode
+ * Standard's Table 3-7 (well-formed byte sequences) that the sequence breaks.
+ * @param lead first byte of the bad sequence
+ * @param next -1 when the lead byte itself is bad; the second byte when it broke the sequence;
+ *   -2 - b when a later byte b did
+ */
+export function describeInvalidUtf8(lead: number, next: number): string {
+  if (lead >= 0x80 && lead <= 0xbf) return `a continuation byte ${hex(lead)} with no lead byte before it`;
+  if (lead === 0xc0 || lead === 0xc1) return `an overlong encoding (lead byte ${hex(lead)} never starts a valid character)`;
+  if (lead >= 0xf5) return `byte ${hex(lead)}, which never occurs in UTF-8`;
+  if (next >= 0) {
+    if (lead === 0xe0 && next < 0xa0 && next >= 0x80) return `an overlong encoding (${hex(lead)} ${hex(next)})`;
+    if (lead === 0xf0 && next < 0x90 && next >= 0x80) return `an overlong encoding (${hex(lead)} ${hex(next)})`;
+    if (lead === 0xed && next >= 0xa0 && next <= 0xbf) return `a surrogate code point (${hex(lead)} ${hex(next)}: U+D800 to U+DFFF are not characters)`;
+    if (lead === 0xf4 && next >= 0x90 && next <= 0xbf) return `a code point above U+10FFFF (${hex(lead)} ${hex(next)})`;
+  }
+  const breaker = next >= 0 ? next : -2 - next;
+  return `a character cut short: lead byte ${hex(lead)} is followed by ${hex(breaker)}, not by a continuation byte`;
 }
 
 /** Number of bytes UTF-8 uses for a code point (RFC 3629, section 3). */

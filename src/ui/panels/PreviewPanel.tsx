@@ -4,6 +4,7 @@ import { useAppState } from '../store/store';
 import { previewView } from '../view/previewView';
 import type { PreviewView } from '../view/previewView';
 import { SymbolizationPreview } from './SymbolizationPreview';
+import { cautionColumns, physiologicalCaution } from '../view/cautionView';
 
 function Ready({ view, symbolization }: { readonly view: Extract<PreviewView, { kind: 'ready' }>; readonly symbolization: SymbolizationSummary | undefined }) {
   return (
@@ -68,10 +69,19 @@ function Ready({ view, symbolization }: { readonly view: Extract<PreviewView, { 
 export function PreviewPanel() {
   const preview = useAppState((s) => s.preview);
   const view = useMemo(() => (preview === null ? null : previewView(preview)), [preview]);
-  if (view === null) return null;
+  const csvColumn = useAppState((s) => s.reading.csvColumn);
+  if (view === null || preview === null) return null;
+  const format = preview.kind === 'ready' ? preview.model.format : '';
+  const header = preview.kind === 'ready' && preview.model.linesKind === 'text' ? (preview.model.lines[0] ?? null) : null;
+  const caution = physiologicalCaution({ name: preview.name, format }, cautionColumns(format, csvColumn, header));
   return (
     <section className="panel preview" aria-labelledby="preview-heading" data-testid="preview">
       <h2 id="preview-heading">{view.title}</h2>
+      {caution !== null && (
+        <p className="caution-note" role="note" data-testid="preview-physiological-caution">
+          {caution}
+        </p>
+      )}
       {view.kind === 'failed' ? (
         <p className="alert-message" role="alert">
           {view.message}

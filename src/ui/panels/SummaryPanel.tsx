@@ -5,13 +5,22 @@ import { exportFileName } from '../../export/exportFileName';
 import { reportHtml } from '../../figures';
 import { useAppState } from '../store/store';
 import { summaryView } from '../view/summaryView';
+import { cautionColumns, physiologicalCaution } from '../view/cautionView';
 
 function Summary({ result, stale }: { readonly result: AnalysisResult; readonly stale: boolean }) {
   const v = useMemo(() => summaryView(result), [result]);
+  const csvColumn = useAppState((s) => s.reading.csvColumn);
+  const columns = useMemo(() => cautionColumns(result.input.format, csvColumn), [result.input.format, csvColumn]);
+  const caution = physiologicalCaution(result.input, columns);
   return (
     <>
       <p className="input-name">{v.inputName}</p>
       <p className="muted">{v.inputLine}</p>
+      {caution !== null && (
+        <p className="caution-note" role="note" data-testid="physiological-caution">
+          {caution}
+        </p>
+      )}
       {stale && <p className="hint">A new run is in progress; this is the previous result.</p>}
       <div className="headline" data-testid="headline">
         <p className="headline-label">Entropy rate h</p>
@@ -91,19 +100,19 @@ function Summary({ result, stale }: { readonly result: AnalysisResult; readonly 
           </ul>
         </div>
       )}
-      <ReportButton result={result} />
+      <ReportButton result={result} columns={columns} />
     </>
   );
 }
 
 /** Saves the one-file HTML report of the shown result, with the figures as the page's view options shape them. */
-function ReportButton({ result }: { readonly result: AnalysisResult }) {
+function ReportButton({ result, columns }: { readonly result: AnalysisResult; readonly columns: readonly string[] }) {
   const view = useAppState((s) => s.view);
   const [problem, setProblem] = useState<string | null>(null);
   const save = () => {
     setProblem(null);
     try {
-      const html = reportHtml(result, { date: new Date().toISOString(), view });
+      const html = reportHtml(result, { date: new Date().toISOString(), view, columns });
       downloadBlob(new Blob([html], { type: 'text/html' }), exportFileName(result.input.name, 'report', 'html'));
     } catch (e) {
       setProblem(`The report could not be made: ${e instanceof Error ? e.message : String(e)}`);

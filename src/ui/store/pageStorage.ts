@@ -30,3 +30,16 @@ export function pageStorage(): { storage: StateStorage; wholeResults: boolean } 
   }
   return { storage: legacy ?? memoryStorage(), wholeResults: false };
 }
+
+/**
+ * The same place for data besides the saved state (the running analysis's rows), without the
+ * one-time move from localStorage: that move is for the saved state's key alone, and another key
+ * read or written through the same adapter would end it early.
+ */
+export function pageSideStorage(): StateStorage {
+  if (typeof indexedDB !== 'undefined') {
+    const db = createStore(PAGE_DATABASE, PAGE_OBJECT_STORE);
+    return keyValueStorage({ get: (k) => get(k, db), set: (k, v) => set(k, v, db), del: (k) => del(k, db) }, null);
+  }
+  return localStorageOrNull() ?? memoryStorage();
+}

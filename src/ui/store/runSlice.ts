@@ -57,7 +57,8 @@ export interface PartialRows {
   readonly maxN: number;
   /** Rows n = 1..k in order. */
   readonly rows: readonly LengthRow[];
-  readonly status: 'running' | 'cancelled';
+  /** 'stopped': the worker died; 'interrupted': the page was reloaded during the run (the rows were saved). */
+  readonly status: 'running' | 'cancelled' | 'stopped' | 'interrupted';
 }
 
 /** A failed run, told in plain words; `message` is the core's message, unchanged. */
@@ -88,6 +89,11 @@ export function isAbortError(error: unknown): boolean {
   return typeof error === 'object' && error !== null && (error as { name?: unknown }).name === 'AbortError';
 }
 
+/** Whether an error is the analysis worker's death (analysisClient's WorkerStopped). */
+export function isWorkerStopped(error: unknown): boolean {
+  return typeof error === 'object' && error !== null && (error as { name?: unknown }).name === 'WorkerStopped';
+}
+
 /** The title and message shown for an error thrown by the reader, the analysis or the worker. */
 export function describeFailure(error: unknown, label: string): RunFailure {
   const name = typeof error === 'object' && error !== null ? (error as { name?: unknown }).name : undefined;
@@ -97,6 +103,7 @@ export function describeFailure(error: unknown, label: string): RunFailure {
   const message = raw.trim() === '' ? 'no details were given' : raw;
   if (name === 'ReadError') return { title: `Could not read ${label}`, message };
   if (name === 'RangeError') return { title: `The analysis of ${label} refused its input`, message };
+  if (name === 'WorkerStopped') return { title: `The analysis of ${label} stopped unexpectedly`, message };
   return { title: `The analysis of ${label} failed`, message };
 }
 
@@ -156,7 +163,10 @@ export function runActions(store: StoreHandle) {
     failRun(id: number, error: unknown): void {
       const { run } = store.getState();
       if (!isCurrent(id) || run.status !== 'running') return;
-      store.setState({ run: { status: 'idle', note: null }, failure: describeFailure(error, run.label), partial: null });
+      // A worker that died leaves the rows it finished: they stay, marked as stopped.
+      const { partial } = store.getState();
+      const stopped = isWorkerStopped(error) && partial !== null && partial.runId === id && partial.rows.length > 0;
+      store.setState({ run: { status: 'idle', note: null }, failure: describeFailure(error, run.label), partial: stopped ? { ...partial, status: 'stopped' } : null });
     },
     dismissFailure(): void {
       store.setState({ failure: null });

@@ -8,7 +8,7 @@ import type { CalibrationState } from './calibrationSlice';
 import { initialInputState, inputActions, restoreDemoLength, restoreReading } from './inputSlice';
 import type { InputState } from './inputSlice';
 import { memoryStorage } from './memoryStorage';
-import { pageStorage } from './pageStorage';
+import { pageSideStorage, pageStorage } from './pageStorage';
 import { initialResultState, MAX_STORED_RESULT_CHARS, restoreResult, resultActions, resultForStorage } from './resultSlice';
 import type { ResultState } from './resultSlice';
 import { initialRunState, runActions } from './runSlice';
@@ -21,6 +21,7 @@ import { initialViewState, restoreView, viewActions } from './viewSlice';
 import type { ViewState } from './viewSlice';
 import { comparisonActions, initialComparisonState, restoreComparisonResult } from './comparisonSlice';
 import type { ComparisonState } from './comparisonSlice';
+import { keepPartialRows } from './partialRowsKeeper';
 
 export type AppState = InputState & SettingsState & RunState & ResultState & ViewState & SessionState & CalibrationState & ComparisonState;
 /** What slice actions need of a store. */
@@ -159,6 +160,9 @@ export function whenHydrated(then: () => void, store: Pick<typeof appStore, 'per
     });
   }
 }
+
+// The running analysis's rows survive a reload too (marked "interrupted by a reload").
+keepPartialRows(appStore, pageSideStorage(), (then) => whenHydrated(then));
 
 /** Selects one field (or a derived value) of the page's store in a component. */
 export function useAppState<T>(selector: (state: AppState) => T): T {

@@ -6,6 +6,12 @@ import type { PartialRows } from '../store/runSlice';
  */
 export function partialLabel(partial: PartialRows): string {
   const k = partial.rows[partial.rows.length - 1]?.n ?? 0;
+  if (partial.status === 'stopped') {
+    return `Stopped unexpectedly at n = ${k} of ${partial.maxN} · ${partial.label}: the rows n = 1..${k} are kept as computed, with no estimate or trusted range.`;
+  }
+  if (partial.status === 'interrupted') {
+    return `Interrupted by a reload at n = ${k} of ${partial.maxN} · ${partial.label}: the rows n = 1..${k} are kept as computed, with no estimate or trusted range.`;
+  }
   if (partial.status === 'cancelled') {
     return `Cancelled at n = ${k} of ${partial.maxN} · ${partial.label}: the rows n = 1..${k} are kept as computed, with no estimate or trusted range.`;
   }

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { Utf8Decoder, utf8Length } from '../../../src/core/sequence/utf8Decoder';
+import { Utf8Decoder, describeInvalidUtf8, utf8Length } from '../../../src/core/sequence/utf8Decoder';
 
 function decodeAll(bytes: readonly number[] | Uint8Array, cuts: readonly number[] = []) {
   const data = Uint8Array.from(bytes);
@@ -63,6 +63,31 @@ describe('Utf8Decoder', () => {
   it('reports a sequence still open at the end of input as truncated at its first byte', () => {
     const r = decodeAll(hex('41 E2 82')); // "A" and the first two bytes of U+20AC (E2 82 AC; from memory)
     expect(r).toEqual({ codePoints: [0x41], stop: 'truncated', stopByte: 1 });
+  });
+
+  it('names why a sequence is ill-formed, by the row of Unicode Table 3-7 it breaks, whatever the split', () => {
+    // Byte ranges of the Unicode Standard, Table 3-7 (well-formed UTF-8 byte sequences; from memory).
+    const cases: [string, RegExp][] = [
+      ['41 80', /^a continuation byte 0x80 with no lead byte before it$/],
+      ['C1 BF', /^an overlong encoding \(lead byte 0xC1/],
+      ['E0 9F BF', /^an overlong encoding \(0xE0 0x9F\)$/],
+      ['F0 8F BF BF', /^an overlong encoding \(0xF0 0x8F\)$/],
+      ['ED BF BF', /^a surrogate code point \(0xED 0xBF/],
+      ['F4 90 80 80', /^a code point above U\+10FFFF \(0xF4 0x90\)$/],
+      ['F8 88 80 80 80', /^byte 0xF8, which never occurs in UTF-8$/],
+      ['E2 82 41', /^a character cut short: lead byte 0xE2 is followed by 0x41, not by a continuation byte$/],
+      ['C3 28', /^a character cut short: lead byte 0xC3 is followed by 0x28/],
+    ];
+    for (const [bytes, why] of cases) {
+      for (const cut of [0, 1, 2, 3]) {
+        const data = Uint8Array.from(hex(bytes));
+        const decoder = new Utf8Decoder();
+        decoder.decode(data.subarray(0, cut));
+        if (decoder.stop === 'none') decoder.decode(data.subarray(cut));
+        expect(decoder.stop, bytes).toBe('invalid');
+        expect(describeInvalidUtf8(decoder.stopLead, decoder.stopNext), `${bytes} cut at ${cut}`).toMatch(why);
+      }
+    }
   });
 
   it('stops at a NUL byte', () => {

@@ -138,6 +138,25 @@ describe('run slice', () => {
     expect(state.result).toBe(result);
   });
 
+  it('failRun after the worker died keeps the rows computed so far, marked stopped, and titles the failure', () => {
+    const s = testStore();
+    const result = fakeResult();
+    s.completeRun(s.beginRun('x', 40), result);
+    const id = s.beginRun('“chain.txt”', 40);
+    s.addPartialRows(id, [lengthRow(1), lengthRow(2)]);
+    const died = Object.assign(new Error('the analysis stopped unexpectedly (the worker was terminated); press Run to start it again'), { name: 'WorkerStopped' });
+    s.failRun(id, died);
+    const state = s.store.getState();
+    expect(state.partial).toMatchObject({ runId: id, status: 'stopped' });
+    expect(state.partial?.rows).toHaveLength(2);
+    expect(state.failure).toEqual({ title: 'The analysis of “chain.txt” stopped unexpectedly', message: died.message });
+    expect(state.run.status).toBe('idle');
+    expect(state.result).toBe(result);
+    // Run again: a fresh run starts from an empty table.
+    const again = s.beginRun('“chain.txt”', 40);
+    expect(s.store.getState().partial).toMatchObject({ runId: again, status: 'running', rows: [] });
+  });
+
   it('cancelRun before any row finished leaves no partial table', () => {
     const s = testStore();
     s.cancelRun(s.beginRun('y', 40));

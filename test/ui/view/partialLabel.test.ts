@@ -21,4 +21,10 @@ describe('partialLabel', () => {
       'Cancelled at n = 2 of 30 · Fair coin: the rows n = 1..2 are kept as computed, with no estimate or trusted range.',
     );
   });
+
+  it('says where a run stopped when its worker died, and when a reload interrupted it', () => {
+    const rows = [lengthRow(1), lengthRow(2), lengthRow(3)];
+    expect(partialLabel({ ...base, status: 'stopped', rows })).toBe('Stopped unexpectedly at n = 3 of 30 · Fair coin: the rows n = 1..3 are kept as computed, with no estimate or trusted range.');
+    expect(partialLabel({ ...base, status: 'interrupted', rows })).toBe('Interrupted by a reload at n = 3 of 30 · Fair coin: the rows n = 1..3 are kept as computed, with no estimate or trusted range.');
+  });
 });
