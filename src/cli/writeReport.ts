@@ -1,12 +1,12 @@
 import { writeFile } from 'node:fs/promises';
-import type { AnalysisResult } from '../core';
+import type { AnalysisResult, CalibrationResult } from '../core';
 import { reportHtml } from '../figures';
 import { OutputError } from './outputStream';
 import { writeFailureReason } from './writeFigures';
 
-/** `--report PATH.html`: the one-file HTML report of the result, dated now (UTC, ISO 8601). */
-export async function writeReport(result: AnalysisResult, path: string): Promise<void> {
-  const html = reportHtml(result, { date: new Date().toISOString() });
+/** `--report PATH.html`: the one-file HTML report of the result, dated now (UTC, ISO 8601), with the calibration when `--calibrate` ran. */
+export async function writeReport(result: AnalysisResult, path: string, calibration: CalibrationResult | null = null): Promise<void> {
+  const html = reportHtml(result, { date: new Date().toISOString(), calibration });
   try {
     await writeFile(path, html, 'utf8');
   } catch (e) {
