@@ -1,0 +1,78 @@
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { expect, test } from '@playwright/test';
+import type { Locator, Page } from '@playwright/test';
+import { collectErrors, screenshot } from './pageWatch';
+
+const DEMO = 'Hill-top station wind sectors (invented)';
+const LENGTH = 5_000;
+
+/** Everything the calibration panel prints: progress, fitted model, the table and the corrected h. */
+async function panelNumbers(panel: Locator): Promise<string[]> {
+  return [
+    await panel.getByTestId('calibration-progress').innerText(),
+    await panel.getByTestId('calibration-model').innerText(),
+    await panel.getByTestId('calibration-table').innerText(),
+    await panel.getByTestId('calibration-corrected').innerText(),
+  ];
+}
+
+async function idle(page: Page): Promise<void> {
+  await expect(page.locator('.input-name')).toHaveText(DEMO, { timeout: 60_000 });
+  await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 60_000 });
+  await expect(page.getByTestId('entropy-interval')).toContainText(/interval/);
+}
+
+test('a session saved after a calibration opens in a fresh browser with the same calibration numbers, without computing', async ({ page, browser }) => {
+  const errors = collectErrors(page);
+  const dir = mkdtempSync(join(tmpdir(), 'returnrate-session-extras-'));
+  await page.goto('/');
+  await idle(page);
+  // The default demo again at a small length, so the calibration is quick.
+  await page.getByRole('spinbutton', { name: 'Symbols' }).fill(String(LENGTH));
+  await page.getByRole('button', { name: 'Run', exact: true }).click();
+  await expect(page.getByText(`${LENGTH.toLocaleString('en-US')} symbols`).first()).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByTestId('run-status')).toHaveText('Idle');
+
+  const panel = page.getByRole('region', { name: 'Calibration at this N' });
+  await panel.getByLabel('Number of replicates').fill('10');
+  await panel.getByRole('button', { name: 'Calibrate at this N' }).click();
+  await expect(panel.getByTestId('calibration-progress')).toHaveText('Done: 10 replicates', { timeout: 90_000 });
+  const before = await panelNumbers(panel);
+
+  // The calibration figure has its export toolbar; its CSV names the input, its SHA-256 line and the replicates and seed.
+  const toolbar = panel.getByRole('toolbar');
+  await expect(toolbar.getByRole('button', { name: 'Download SVG' })).toBeVisible();
+  const [csv] = await Promise.all([page.waitForEvent('download'), toolbar.getByRole('button', { name: 'Download CSV' }).click()]);
+  expect(csv.suggestedFilename()).toMatch(/_calibration\.csv$/);
+  const csvPath = join(dir, csv.suggestedFilename());
+  await csv.saveAs(csvPath);
+  const csvText = readFileSync(csvPath, 'utf8');
+  expect(csvText).toContain(`# Input: ${DEMO}`);
+  expect(csvText).toMatch(/# View: calibration by Markov surrogates: 10 of 10 replicates, base seed \d+/);
+
+  const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save session' }).click()]);
+  const path = join(dir, download.suggestedFilename());
+  await download.saveAs(path);
+  const saved = JSON.parse(readFileSync(path, 'utf8')) as { calibration?: { summary: { replicates: number } } };
+  expect(saved.calibration?.summary.replicates).toBe(10);
+
+  const fresh = await browser.newContext();
+  const other = await fresh.newPage();
+  const otherErrors = collectErrors(other);
+  await other.goto('/');
+  await idle(other);
+  const otherPanel = other.getByRole('region', { name: 'Calibration at this N' });
+  await expect(otherPanel.getByTestId('calibration-table')).toHaveCount(0);
+  await other.getByLabel('Open a session file').setInputFiles(path);
+  await expect(other.getByRole('status').first()).toContainText(/Opened session saved/);
+  expect(await panelNumbers(otherPanel)).toEqual(before);
+  await expect(otherPanel.getByTestId('calibration-stale')).toHaveCount(0);
+  await expect(otherPanel.getByTestId('calibration-figure')).toBeVisible();
+  await expect(otherPanel.getByRole('toolbar').getByRole('button', { name: 'Download CSV' })).toBeVisible();
+  await screenshot(other, 'session-extras-opened');
+  await fresh.close();
+  expect(errors).toEqual([]);
+  expect(otherErrors).toEqual([]);
+});
