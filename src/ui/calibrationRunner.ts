@@ -35,6 +35,10 @@ export function createCalibrationRunner(client: CalibrationClient, store: StoreH
         actions.failCalibration(id, 'This page no longer holds the input of the shown result (after a reload or an opened session): run the analysis again, then calibrate.');
         return;
       }
+      // An opened session (or anything else) that replaces this calibration in the store stops its workers.
+      const unsubscribe = store.subscribe((state) => {
+        if (state.calibration?.id !== id) own.abort();
+      });
       try {
         await client.calibrate(input, result.settings, replicates, CALIBRATION_BASE_SEED, {
           signal: own.signal,
@@ -46,6 +50,7 @@ export function createCalibrationRunner(client: CalibrationClient, store: StoreH
         if (own.signal.aborted) actions.cancelCalibration(id);
         else actions.failCalibration(id, error);
       } finally {
+        unsubscribe();
         if (controller === own) controller = null;
       }
     },

@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { AnalysisClient } from '../../src/ui/analysisClient';
+import type { CalibrationClient } from '../../src/ui/calibrationClient';
+import { createCalibrationRunner } from '../../src/ui/calibrationRunner';
 import { createRunner } from '../../src/ui/runner';
 import { calibrationRunOfResult } from '../../src/ui/store/calibrationSlice';
 import { calibrationView } from '../../src/ui/view/calibrationView';
@@ -72,5 +74,31 @@ describe('sessions keep the calibration and the comparison', () => {
     expect(page.store.getState().failure).toBeNull();
     expect(page.store.getState().calibration).toBeNull();
     expect(page.store.getState().comparisonResult).toBeNull();
+  });
+});
+
+describe('opening a session during a calibration', () => {
+  it('stops the running calibration (its signal aborts) and shows the session’s one instead', async () => {
+    const { result } = extrasFixture();
+    const s = testStore();
+    s.completeRun(s.beginRun('x', 12), result);
+    let signal: AbortSignal | null = null;
+    const client: CalibrationClient = {
+      calibrate: (_input, _settings, _replicates, _seed, call) =>
+        new Promise((_resolve, reject) => {
+          signal = call.signal;
+          call.signal.addEventListener('abort', () => reject(new DOMException('stopped', 'AbortError')));
+        }),
+    };
+    const running = createCalibrationRunner(client, s.store, () => ({ kind: 'demo', id: 'x', length: 3000, seed: 1 })).start();
+    await Promise.resolve();
+    expect(signal).not.toBeNull();
+    expect(signal!.aborted).toBe(false);
+    const file = createRunner(noClient, shownPage().store).sessionFile()!;
+    await createRunner(noClient, s.store).openSession(new File([file.text], file.name));
+    expect(signal!.aborted).toBe(true);
+    await running;
+    expect(s.store.getState().calibration?.status).toBe('done');
+    expect(s.store.getState().calibration?.records).toHaveLength(10);
   });
 });
