@@ -1,9 +1,10 @@
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import type { Locator, Page } from '@playwright/test';
 import { collectErrors, screenshot } from './pageWatch';
+import { twoStateChainText } from './sequenceFiles';
 
 const DEMO = 'Hill-top station wind sectors (invented)';
 const LENGTH = 5_000;
@@ -24,7 +25,12 @@ async function idle(page: Page): Promise<void> {
   await expect(page.getByTestId('entropy-interval')).toContainText(/interval/);
 }
 
-test('a session saved after a calibration opens in a fresh browser with the same calibration numbers, without computing', async ({ page, browser }) => {
+/** The comparison's three rate rows as the panel prints them. */
+async function comparisonNumbers(page: Page): Promise<string[]> {
+  return Promise.all(['cross', 'entropy-a', 'relative'].map((id) => page.getByTestId(`compare-${id}`).innerText()));
+}
+
+test('a session saved after a calibration and a comparison opens in a fresh browser with the same numbers, without computing', async ({ page, browser }) => {
   const errors = collectErrors(page);
   const dir = mkdtempSync(join(tmpdir(), 'returnrate-session-extras-'));
   await page.goto('/');
@@ -52,11 +58,33 @@ test('a session saved after a calibration opens in a fresh browser with the same
   expect(csvText).toContain(`# Input: ${DEMO}`);
   expect(csvText).toMatch(/# View: calibration by Markov surrogates: 10 of 10 replicates, base seed \d+/);
 
+  // A small comparison of two files (invented two-state chains; only the page's behaviour is checked).
+  const fileA = join(dir, 'gauge-a.txt');
+  const fileB = join(dir, 'gauge-b.txt');
+  writeFileSync(fileA, twoStateChainText(6_000, [0.9, 0.6], 11));
+  writeFileSync(fileB, twoStateChainText(6_000, [0.7, 0.5], 12));
+  await page.getByTestId('compare-panel').scrollIntoViewIfNeeded();
+  await page.getByTestId('compare-file-a').setInputFiles(fileA);
+  await page.getByTestId('compare-file-b').setInputFiles(fileB);
+  await page.getByTestId('compare-run').click();
+  await expect(page.getByTestId('compare-cross').locator('td').nth(1)).toHaveText(/^-?\d+\.\d{4} to -?\d+\.\d{4}$/, { timeout: 60_000 });
+  const compared = await comparisonNumbers(page);
+  // The comparison's convergence figure exports too; its CSV names both inputs with their SHA-256.
+  const compareToolbar = page.getByTestId('compare-panel').getByRole('toolbar').first();
+  const [compareCsv] = await Promise.all([page.waitForEvent('download'), compareToolbar.getByRole('button', { name: 'Download CSV' }).click()]);
+  expect(compareCsv.suggestedFilename()).toBe('gauge-a-vs-gauge-b_compare-convergence.csv');
+  const compareCsvPath = join(dir, compareCsv.suggestedFilename());
+  await compareCsv.saveAs(compareCsvPath);
+  const compareText = readFileSync(compareCsvPath, 'utf8');
+  expect(compareText).toContain('# Input A: gauge-a.txt');
+  expect(compareText).toMatch(/# SHA-256 of A: [0-9a-f]{64}\r\n# Input B: gauge-b.txt\r\n# SHA-256 of B: [0-9a-f]{64}/);
+
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save session' }).click()]);
   const path = join(dir, download.suggestedFilename());
   await download.saveAs(path);
-  const saved = JSON.parse(readFileSync(path, 'utf8')) as { calibration?: { summary: { replicates: number } } };
+  const saved = JSON.parse(readFileSync(path, 'utf8')) as { calibration?: { summary: { replicates: number } }; comparison?: { inputB: { name: string } } };
   expect(saved.calibration?.summary.replicates).toBe(10);
+  expect(saved.comparison?.inputB.name).toBe('gauge-b.txt');
 
   const fresh = await browser.newContext();
   const other = await fresh.newPage();
@@ -71,6 +99,8 @@ test('a session saved after a calibration opens in a fresh browser with the same
   await expect(otherPanel.getByTestId('calibration-stale')).toHaveCount(0);
   await expect(otherPanel.getByTestId('calibration-figure')).toBeVisible();
   await expect(otherPanel.getByRole('toolbar').getByRole('button', { name: 'Download CSV' })).toBeVisible();
+  expect(await comparisonNumbers(other)).toEqual(compared);
+  await expect(other.getByTestId('compare-convergence-figure')).toBeVisible();
   await screenshot(other, 'session-extras-opened');
   await fresh.close();
   expect(errors).toEqual([]);
