@@ -2,7 +2,8 @@ import type { CalibrationClient, CalibrationInput } from './calibrationClient';
 import { createCalibrationClient } from './calibrationClient';
 import { runner } from './runner';
 import { appStore, bindActions } from './store/store';
-import type { StoreHandle } from './store/store';
+import type { StoreApi } from 'zustand';
+import type { AppState, StoreHandle } from './store/store';
 
 /** Base seed of the page's surrogates (the command line's default too), so a calibration can be repeated. */
 export const CALIBRATION_BASE_SEED = 1;
@@ -15,7 +16,10 @@ export interface CalibrationRunner {
   cancel(): void;
 }
 
-export function createCalibrationRunner(client: CalibrationClient, store: StoreHandle, inputOf: () => CalibrationInput | null): CalibrationRunner {
+/** The store with its subscription, so a calibration replaced in it (an opened session) stops its workers. */
+type WatchedStore = StoreHandle & Pick<StoreApi<AppState>, 'subscribe'>;
+
+export function createCalibrationRunner(client: CalibrationClient, store: WatchedStore, inputOf: () => CalibrationInput | null): CalibrationRunner {
   const actions = bindActions(store);
   let controller: AbortController | null = null;
   return {
