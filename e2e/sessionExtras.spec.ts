@@ -82,7 +82,7 @@ test('a session saved after a calibration and a comparison opens in a fresh brow
   const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save session' }).click()]);
   const path = join(dir, download.suggestedFilename());
   await download.saveAs(path);
-  const saved = JSON.parse(readFileSync(path, 'utf8')) as { calibration?: { summary: { replicates: number } }; comparison?: { inputB: { name: string } } };
+  const saved = JSON.parse(readFileSync(path, 'utf8')) as { calibration?: { summary: { replicates: number; entropy: { bias: number | null } } }; comparison?: { inputB: { name: string } } };
   expect(saved.calibration?.summary.replicates).toBe(10);
   expect(saved.comparison?.inputB.name).toBe('gauge-b.txt');
 
@@ -101,6 +101,15 @@ test('a session saved after a calibration and a comparison opens in a fresh brow
   await expect(otherPanel.getByRole('toolbar').getByRole('button', { name: 'Download CSV' })).toBeVisible();
   expect(await comparisonNumbers(other)).toEqual(compared);
   await expect(other.getByTestId('compare-convergence-figure')).toBeVisible();
+  // The report of the opened session's result carries its calibration, numbers and figure included.
+  const [report] = await Promise.all([other.waitForEvent('download'), other.getByRole('button', { name: 'Download report' }).click()]);
+  const reportPath = join(dir, report.suggestedFilename());
+  await report.saveAs(reportPath);
+  const html = readFileSync(reportPath, 'utf8');
+  expect(html).toContain('<section id="calibration">');
+  expect(html).toContain('id="figure-calibration"');
+  expect(html).toContain(`data-value="${String(saved.calibration?.summary.entropy.bias)}"`);
+  expect(html).not.toMatch(/<script/i);
   await screenshot(other, 'session-extras-opened');
   await fresh.close();
   expect(errors).toEqual([]);
