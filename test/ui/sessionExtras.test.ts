@@ -46,6 +46,9 @@ describe('sessions keep the calibration and the comparison', () => {
     expect(after).toEqual(before);
     expect(after.stale).toBe(false);
     expect(after.rows).toHaveLength(2);
+    // The file sorts nested keys; the same analysis run again (settings in the core's key order) still matches.
+    expect(Object.keys(state.calibration!.analysis.settings)).toEqual([...Object.keys(result.settings)].sort());
+    expect(calibrationView(state.calibration!, { ...result }).stale).toBe(false);
   });
 
   it('a partial calibration comes back cancelled with its note; a stale one is not saved', async () => {
