@@ -182,9 +182,9 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
     io.stdout.write(calibrationText(calibration, result.entropy.unit, result.sigma2.unit));
   }
   if (values.figures !== undefined) {
-    await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`));
+    await writeFigures(result, String(values.figures), (line) => io.stderr.write(`${line}\n`), calibration);
   }
-  if (values.report !== undefined) await writeReport(result, String(values.report), values.column === undefined ? [] : [String(values.column)]);
+  if (values.report !== undefined) await writeReport(result, String(values.report), values.column === undefined ? [] : [String(values.column)], calibration);
   if (values.timing === true) {
     // For the benchmark: one JSON line on standard error.
     const timing = {

@@ -1,7 +1,7 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import type { AnalysisResult } from '../core';
-import { exportDiagnosticFigures, exportFigures, figureCsv, figureSvg } from '../figures';
+import type { AnalysisResult, CalibrationResult } from '../core';
+import { exportCalibrationFigure, exportDiagnosticFigures, exportFigures, figureCsv, figureSvg } from '../figures';
 import { OutputError } from './outputStream';
 
 const REASONS: Readonly<Record<string, string>> = {
@@ -23,16 +23,18 @@ export function writeFailureReason(e: unknown): string {
  * `--figures DIR`: one SVG and one CSV per view of the result, from the same figure models the
  * workbench draws (exportFigures, at EXPORT_SIZE with the workbench's default view options). The
  * folder is made when missing. A view that cannot be drawn (e.g. too few fluctuations) gets no
- * files and a note on standard error. Returns the paths written.
+ * files and a note on standard error. With a calibration (`--calibrate`), `calibration` too.
+ * Returns the paths written.
  */
-export async function writeFigures(result: AnalysisResult, dir: string, note: (line: string) => void): Promise<string[]> {
+export async function writeFigures(result: AnalysisResult, dir: string, note: (line: string) => void, calibration: CalibrationResult | null = null): Promise<string[]> {
   try {
     await mkdir(dir, { recursive: true });
   } catch (e) {
     throw new OutputError(`${dir}: cannot make the figures folder (${writeFailureReason(e)})`, { cause: e });
   }
   const written: string[] = [];
-  for (const { id, figure, caption } of [...exportFigures(result), ...exportDiagnosticFigures(result)]) {
+  const extra = calibration === null ? [] : [exportCalibrationFigure(calibration, result)];
+  for (const { id, figure, caption } of [...exportFigures(result), ...exportDiagnosticFigures(result), ...extra]) {
     if (figure.kind !== 'figure') {
       note(`returnrate: note: figure ${id} not written: ${figure.message}`);
       continue;

@@ -105,6 +105,8 @@ export type { JsonObject, JsonValue, Session, SessionParts } from './session/ses
 export { writeSession } from './session/writeSession';
 export { readSession, looksLikeSession } from './session/readSession';
 export { SessionError } from './session/sessionError';
+export { calibrationBelongsTo, calibrationMismatch } from './session/calibrationBelongsTo';
+export type { CalibrationTie } from './session/calibrationBelongsTo';
 export type { SessionErrorCode } from './session/sessionError';
 
 // Calibration at the data's own length: Markov surrogates of the order BIC picks

@@ -13,10 +13,23 @@ export interface FigureCaption {
   readonly program: string;
   /** View options that shape this figure (e.g. 'n = 12'); '' when none. */
   readonly view: string;
+  /** A figure of several inputs (a comparison) names each with its SHA-256; inputName and sha256 then are not printed. */
+  readonly inputs?: readonly CaptionInput[];
+}
+
+/** One of several inputs a figure was made from. */
+export interface CaptionInput {
+  /** Its role, e.g. 'A'. */
+  readonly label: string;
+  readonly name: string;
+  readonly sha256: string | null;
 }
 
 /** The caption of a result's figures; `view` names the view options of one figure. */
-export function figureCaption(result: Pick<AnalysisResult, 'input' | 'settings' | 'program'>, view = ''): FigureCaption {
+export function figureCaption(
+  result: { readonly input: Pick<AnalysisResult['input'], 'name' | 'sha256'> & Partial<AnalysisResult['input']> } & Pick<AnalysisResult, 'settings' | 'program'>,
+  view = '',
+): FigureCaption {
   const s = result.settings;
   const parts = [`max n ${s.maxN}`, `unit ${s.unit}`, `confidence ${s.confidence}`, `max censored fraction ${s.maxCensoredFraction}`];
   if (s.intervalSeconds !== null) parts.push(`interval ${s.intervalSeconds} s/symbol`);
@@ -32,7 +45,13 @@ export function figureCaption(result: Pick<AnalysisResult, 'input' | 'settings' 
 
 /** The caption as plain lines (SVG text lines, CSV comment lines). */
 export function captionLines(caption: FigureCaption): string[] {
-  const lines = [`Input: ${caption.inputName}`, `SHA-256: ${caption.sha256 ?? 'none (generated in memory)'}`, `Settings: ${caption.settings}`];
+  const inputs = caption.inputs ?? [{ label: '', name: caption.inputName, sha256: caption.sha256 }];
+  const lines: string[] = [];
+  for (const i of inputs) {
+    const which = i.label === '' ? '' : ` ${i.label}`;
+    lines.push(`Input${which}: ${i.name}`, `SHA-256${i.label === '' ? '' : ` of ${i.label}`}: ${i.sha256 ?? 'none (generated in memory)'}`);
+  }
+  lines.push(`Settings: ${caption.settings}`);
   if (caption.view !== '') lines.push(`View: ${caption.view}`);
   lines.push(`Made with ${caption.program}`);
   return lines;

@@ -42,3 +42,8 @@ export { autocorrelationFigure } from './autocorrelationFigure';
 export { exportDiagnosticFigures, diagnosticCaption, isDiagnosticFigureId, DIAGNOSTIC_FIGURE_IDS } from './exportDiagnosticFigures';
 export type { DiagnosticFigureId, ExportedDiagnosticFigure } from './exportDiagnosticFigures';
 export { comparisonConvergenceFigure, comparisonQuantileFigure, WAITING_FLUCTUATION_LABEL } from './comparisonFigures';
+export { exportCalibrationFigure, calibrationCaption, calibrationViewText, CALIBRATION_FIGURE_ID } from './exportCalibrationFigure';
+export type { CalibrationFigureId, ExportedCalibrationFigure } from './exportCalibrationFigure';
+export { exportComparisonFigures, comparisonCaption, comparisonInputName, COMPARISON_FIGURE_IDS } from './exportComparisonFigures';
+export type { ComparisonFigureId, ExportedComparisonFigure } from './exportComparisonFigures';
+export type { CaptionInput } from './figureCaption';

@@ -1,4 +1,5 @@
-import type { AlternativeEstimate, AnalysisResult } from '../core';
+import type { AlternativeEstimate, AnalysisResult, CalibrationResult } from '../core';
+import { calibrationSection } from './calibrationReport';
 import { DEFAULT_EXPORT_VIEW, exportFigures, type ExportViewOptions } from './exportFigures';
 import { diagnosticsSection } from './diagnosticsReport';
 import { figureSvg } from './figureSvg';
@@ -12,6 +13,8 @@ export interface ReportOptions {
   readonly view?: ExportViewOptions;
   /** Names of the columns read (CSV), checked by looksPhysiological besides the input's name. */
   readonly columns?: readonly string[];
+  /** A calibration of the result: adds the calibration section with its figure (marked stale when it belongs to another analysis). */
+  readonly calibration?: CalibrationResult | null;
 }
 
 /**
@@ -245,6 +248,7 @@ export function reportHtml(result: AnalysisResult, options: ReportOptions = {}):
     settingsSection(result),
     figuresSection(result, options.view ?? DEFAULT_EXPORT_VIEW),
     diagnosticsSection(result),
+    calibrationSection(result, options.calibration, Math.round(result.entropy.confidence * 1000) / 10),
     lengthsSection(result),
     methodsSection(result),
     cautionsSection(physiological),

@@ -2,7 +2,8 @@ import type { CalibrationClient, CalibrationInput } from './calibrationClient';
 import { createCalibrationClient } from './calibrationClient';
 import { runner } from './runner';
 import { appStore, bindActions } from './store/store';
-import type { StoreHandle } from './store/store';
+import type { StoreApi } from 'zustand';
+import type { AppState, StoreHandle } from './store/store';
 
 /** Base seed of the page's surrogates (the command line's default too), so a calibration can be repeated. */
 export const CALIBRATION_BASE_SEED = 1;
@@ -15,7 +16,10 @@ export interface CalibrationRunner {
   cancel(): void;
 }
 
-export function createCalibrationRunner(client: CalibrationClient, store: StoreHandle, inputOf: () => CalibrationInput | null): CalibrationRunner {
+/** The store with its subscription, so a calibration replaced in it (an opened session) stops its workers. */
+type WatchedStore = StoreHandle & Pick<StoreApi<AppState>, 'subscribe'>;
+
+export function createCalibrationRunner(client: CalibrationClient, store: WatchedStore, inputOf: () => CalibrationInput | null): CalibrationRunner {
   const actions = bindActions(store);
   let controller: AbortController | null = null;
   return {
@@ -35,6 +39,10 @@ export function createCalibrationRunner(client: CalibrationClient, store: StoreH
         actions.failCalibration(id, 'This page no longer holds the input of the shown result (after a reload or an opened session): run the analysis again, then calibrate.');
         return;
       }
+      // An opened session (or anything else) that replaces this calibration in the store stops its workers.
+      const unsubscribe = store.subscribe((state) => {
+        if (state.calibration?.id !== id) own.abort();
+      });
       try {
         await client.calibrate(input, result.settings, replicates, CALIBRATION_BASE_SEED, {
           signal: own.signal,
@@ -46,6 +54,7 @@ export function createCalibrationRunner(client: CalibrationClient, store: StoreH
         if (own.signal.aborted) actions.cancelCalibration(id);
         else actions.failCalibration(id, error);
       } finally {
+        unsubscribe();
         if (controller === own) controller = null;
       }
     },

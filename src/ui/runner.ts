@@ -1,4 +1,4 @@
-import { looksLikeSession, PREVIEW_BYTES, previewHead, readSession, sessionOf, SNIFF_BYTES, writeSession } from '../core';
+import { calibrationBelongsTo, looksLikeSession, PREVIEW_BYTES, previewHead, readSession, sessionOf, SNIFF_BYTES, writeSession } from '../core';
 import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
 import { demoScenario } from '../../workers/demoScenarios';
 import type { AnalysisClient, AnalysisProgress, CallOptions } from './analysisClient';
@@ -186,9 +186,11 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
     cancel: () => controller?.abort(),
     openSession,
     sessionFile: (savedAt = new Date()) => {
-      const { result, settings, view, reading } = store.getState();
+      const { result, settings, view, reading, calibration: run, comparisonResult: comparison } = store.getState();
       if (result === null) return null;
-      const text = writeSession(sessionOf({ result, settings, view, reading, savedAt: savedAt.toISOString() }));
+      // The calibration goes along only when it belongs to the result saved (a stale one would not read back).
+      const calibration = run?.result != null && calibrationBelongsTo(run.result, result) ? run.result : null;
+      const text = writeSession(sessionOf({ result, settings, view, reading, savedAt: savedAt.toISOString(), calibration, comparison }));
       return { name: sessionFileName(result.input.name), text };
     },
     calibrationInput: () => (lastRun !== null && lastRun.result === store.getState().result ? lastRun.input : null),

@@ -1,4 +1,6 @@
 import { ANALYSIS_SCHEMA } from '../result/analysisResult';
+import type { AnalysisResult } from '../result/analysisResult';
+import { sessionCalibration, sessionComparison } from './readSessionExtras';
 import type { Session } from './session';
 import { SESSION_SCHEMA } from './session';
 import { SessionError } from './sessionError';
@@ -271,6 +273,8 @@ export function readSession(text: string): Session {
   object(top['reading'], 'reading');
   object(top['view'], 'view');
   result(top['result'], 'result');
+  if (top['calibration'] !== undefined) sessionCalibration(top['calibration'], 'calibration', top['result'] as AnalysisResult);
+  if (top['comparison'] !== undefined) sessionComparison(top['comparison'], 'comparison');
   return parsed as Session;
 }
 

@@ -5,6 +5,8 @@
  */
 import type { AnalysisResult, AnalysisSettings } from '../result/analysisResult';
 import { PROGRAM_VERSION } from '../result/version';
+import type { CalibrationResult } from '../calibration/calibrationResult';
+import type { ComparisonResult } from '../cross/comparisonResult';
 
 export const SESSION_SCHEMA = 'returnrate.session/1';
 
@@ -27,6 +29,10 @@ export interface Session {
   /** How the figures are drawn; the host restores it with its own checks. */
   readonly view: JsonObject;
   readonly result: AnalysisResult;
+  /** The calibration of `result` (same input name, SHA-256, length and settings; calibrationBelongsTo), when one was shown. Optional: older sessions have none. */
+  readonly calibration?: CalibrationResult;
+  /** The last two-sequence comparison, when one was shown. Optional: older sessions have none. */
+  readonly comparison?: ComparisonResult;
 }
 
 export interface SessionParts {
@@ -38,6 +44,10 @@ export interface SessionParts {
   readonly reading: object;
   /** ISO 8601 time of saving; the host passes its clock so core stays free of it. */
   readonly savedAt: string;
+  /** The calibration of `result`; left out when absent or null. */
+  readonly calibration?: CalibrationResult | null | undefined;
+  /** The last comparison; left out when absent or null. */
+  readonly comparison?: ComparisonResult | null | undefined;
 }
 
 /** The session of these parts, as plain data ready for writeSession. */
@@ -50,5 +60,7 @@ export function sessionOf(parts: SessionParts): Session {
     reading: parts.reading as JsonObject,
     view: parts.view as JsonObject,
     result: parts.result,
+    ...(parts.calibration == null ? {} : { calibration: parts.calibration }),
+    ...(parts.comparison == null ? {} : { comparison: parts.comparison }),
   };
 }

@@ -1,7 +1,7 @@
 import type { Session } from './session';
 
 /** Order of the top-level fields: the schema first, so a reader can tell a session from its head. */
-const TOP_ORDER: readonly (keyof Session)[] = ['schema', 'program', 'savedAt', 'settings', 'reading', 'view', 'result'];
+const TOP_ORDER: readonly (keyof Session)[] = ['schema', 'program', 'savedAt', 'settings', 'reading', 'view', 'result', 'calibration', 'comparison'];
 
 function isPlainObject(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
@@ -16,7 +16,7 @@ function isPlainObject(value: unknown): value is Record<string, unknown> {
  */
 export function writeSession(session: Session): string {
   const top: Record<string, unknown> = {};
-  for (const key of TOP_ORDER) top[key] = session[key];
+  for (const key of TOP_ORDER) if (session[key] !== undefined) top[key] = session[key];
   const sorted = function (this: unknown, _key: string, value: unknown): unknown {
     if (value === top || !isPlainObject(value)) return value;
     const out: Record<string, unknown> = {};

@@ -1,5 +1,17 @@
 import { useState } from 'react';
-import { diagnosticCaption, exportCaption, figureCsv, figureSvg, isDiagnosticFigureId, type DiagnosticFigureId, type ExportFigureId, type FigureModel } from '../../figures';
+import {
+  diagnosticCaption,
+  exportCaption,
+  figureCsv,
+  figureSvg,
+  isDiagnosticFigureId,
+  type CalibrationFigureId,
+  type ComparisonFigureId,
+  type DiagnosticFigureId,
+  type ExportFigureId,
+  type FigureCaption,
+  type FigureModel,
+} from '../../figures';
 import { downloadBlob } from '../../export/downloadBlob';
 import { exportFileName } from '../../export/exportFileName';
 import { svgToPng } from '../../export/svgToPng';
@@ -12,13 +24,24 @@ const PNG_SCALES = [1, 2, 4] as const;
  * as CSV. The files are made from the same model the page draws, with a caption naming the result's
  * input, SHA-256, settings and the view options; nothing leaves the browser.
  */
-export function ExportToolbar({ model, figureId }: { readonly model: FigureModel; readonly figureId: ExportFigureId | DiagnosticFigureId }) {
+export function ExportToolbar({
+  model,
+  figureId,
+  caption: ownCaption,
+}: {
+  readonly model: FigureModel;
+  readonly figureId: ExportFigureId | DiagnosticFigureId | CalibrationFigureId | ComparisonFigureId;
+  /** A figure not drawn from the shown result (calibration, comparison) brings its own caption; its input name starts the file names. */
+  readonly caption?: FigureCaption | undefined;
+}) {
   const result = useAppState((s) => s.result);
   const view = useAppState((s) => s.view);
   const [problem, setProblem] = useState<string | null>(null);
-  if (result === null) return null;
-  const caption = isDiagnosticFigureId(figureId) ? diagnosticCaption(figureId, result) : exportCaption(figureId, result, view);
-  const name = (ext: string): string => exportFileName(result.input.name, figureId, ext);
+  let caption: FigureCaption;
+  if (ownCaption !== undefined) caption = ownCaption;
+  else if (result === null || figureId === 'calibration' || figureId === 'compare-convergence' || figureId === 'compare-qq') return null;
+  else caption = isDiagnosticFigureId(figureId) ? diagnosticCaption(figureId, result) : exportCaption(figureId, result, view);
+  const name = (ext: string): string => exportFileName(caption.inputName, figureId, ext);
   const svg = (): string => figureSvg(model, caption);
   const run = (work: () => Promise<void> | void) => () => {
     setProblem(null);

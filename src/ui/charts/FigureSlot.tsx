@@ -1,5 +1,5 @@
 import { useMemo, type ReactNode } from 'react';
-import type { DiagnosticFigureId, ExportFigureId, Figure, FigureSize } from '../../figures';
+import type { CalibrationFigureId, ComparisonFigureId, DiagnosticFigureId, ExportFigureId, Figure, FigureCaption, FigureSize } from '../../figures';
 import { ChartFrame } from './ChartFrame';
 import { ExportToolbar } from './ExportToolbar';
 import { figureHeight, useElementWidth } from './useElementWidth';
@@ -11,10 +11,13 @@ export function FigureSlot({
   build,
   testId,
   exportId,
+  exportCaption,
 }: {
   readonly build: (size: FigureSize) => Figure;
   readonly testId: string;
-  readonly exportId?: ExportFigureId | DiagnosticFigureId | undefined;
+  readonly exportId?: ExportFigureId | DiagnosticFigureId | CalibrationFigureId | ComparisonFigureId | undefined;
+  /** The caption of a figure not drawn from the shown result (calibration, comparison); it also names the files. */
+  readonly exportCaption?: FigureCaption | undefined;
 }): ReactNode {
   const { ref, width } = useElementWidth<HTMLDivElement>();
   const w = Math.max(260, width);
@@ -28,7 +31,7 @@ export function FigureSlot({
   return (
     <div ref={ref} className="figure-slot">
       {figure.kind === 'figure' ? <ChartFrame model={figure.model} testId={testId} /> : <p className="muted" role="note">{figure.message}</p>}
-      {figure.kind === 'figure' && exportId !== undefined && <ExportToolbar model={figure.model} figureId={exportId} />}
+      {figure.kind === 'figure' && exportId !== undefined && <ExportToolbar model={figure.model} figureId={exportId} caption={exportCaption} />}
     </div>
   );
 }

@@ -1,6 +1,6 @@
-import { useCallback } from 'react';
+import { useCallback, useMemo } from 'react';
 import type { CalibrationResult } from '../../core';
-import { calibrationFigure, type FigureSize } from '../../figures';
+import { calibrationCaption, calibrationFigure, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
 import { calibrationRunner, MAX_PAGE_REPLICATES } from '../calibrationRunner';
 import { setCalibrationReplicates, useAppState } from '../store/store';
@@ -8,7 +8,9 @@ import { calibrationView } from '../view/calibrationView';
 
 function CalibrationFigure({ result }: { readonly result: CalibrationResult }) {
   const build = useCallback((size: FigureSize) => calibrationFigure(result, size, 'entropy'), [result]);
-  return <FigureSlot build={build} testId="calibration-figure" />;
+  const shown = useAppState((s) => s.result);
+  const caption = useMemo(() => calibrationCaption(result, shown), [result, shown]);
+  return <FigureSlot build={build} testId="calibration-figure" exportId="calibration" exportCaption={caption} />;
 }
 
 /**

@@ -1,6 +1,6 @@
 import { useCallback, type DragEvent } from 'react';
 import { sourceCatalog, type ComparisonResult } from '../../core';
-import { comparisonConvergenceFigure, comparisonQuantileFigure, type FigureSize } from '../../figures';
+import { comparisonCaption, comparisonConvergenceFigure, comparisonQuantileFigure, type FigureSize } from '../../figures';
 import { FigureSlot } from '../charts/FigureSlot';
 import { comparisonRunner } from '../comparisonRunner';
 import { useAppState } from '../store/store';
@@ -109,8 +109,8 @@ function ComparisonFigures({ result }: { readonly result: ComparisonResult }) {
   const quantiles = useCallback((size: FigureSize) => comparisonQuantileFigure(result, size), [result]);
   return (
     <>
-      <FigureSlot build={convergence} testId="compare-convergence-figure" />
-      <FigureSlot build={quantiles} testId="compare-qq-figure" />
+      <FigureSlot build={convergence} testId="compare-convergence-figure" exportId="compare-convergence" exportCaption={comparisonCaption('compare-convergence', result)} />
+      <FigureSlot build={quantiles} testId="compare-qq-figure" exportId="compare-qq" exportCaption={comparisonCaption('compare-qq', result)} />
     </>
   );
 }

@@ -47,7 +47,7 @@ export function SessionPanel() {
       </div>
       <p className="hint" data-testid="session-status">
         {session === null
-          ? 'A session keeps the result, settings and view in one JSON file; opening it shows every view without computing.'
+          ? 'A session keeps the result, settings and view, with the calibration and the last comparison when there are any, in one JSON file; opening it shows every view without computing.'
           : `Session of “${session.inputName}”, saved ${savedAtText(session.savedAt)}.${session.sha256 === null ? '' : ' Drop the original file to check it is the same data.'}`}
       </p>
       {dataCheck !== null && (

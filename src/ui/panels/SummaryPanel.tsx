@@ -1,4 +1,5 @@
 import { useMemo, useState } from 'react';
+import { calibrationBelongsTo } from '../../core';
 import type { AnalysisResult } from '../../core';
 import { downloadBlob } from '../../export/downloadBlob';
 import { exportFileName } from '../../export/exportFileName';
@@ -105,14 +106,17 @@ function Summary({ result, stale }: { readonly result: AnalysisResult; readonly 
   );
 }
 
-/** Saves the one-file HTML report of the shown result, with the figures as the page's view options shape them. */
+/** Saves the one-file HTML report of the shown result, with the figures as the page's view options shape them,
+ * and the calibration when it belongs to the shown result. */
 function ReportButton({ result, columns }: { readonly result: AnalysisResult; readonly columns: readonly string[] }) {
   const view = useAppState((s) => s.view);
+  const calibrated = useAppState((s) => s.calibration?.result ?? null);
   const [problem, setProblem] = useState<string | null>(null);
   const save = () => {
     setProblem(null);
     try {
-      const html = reportHtml(result, { date: new Date().toISOString(), view, columns });
+      const calibration = calibrated !== null && calibrationBelongsTo(calibrated, result) ? calibrated : null;
+      const html = reportHtml(result, { date: new Date().toISOString(), view, columns, calibration });
       downloadBlob(new Blob([html], { type: 'text/html' }), exportFileName(result.input.name, 'report', 'html'));
     } catch (e) {
       setProblem(`The report could not be made: ${e instanceof Error ? e.message : String(e)}`);

@@ -68,6 +68,25 @@ export function restoreCalibration(stored: unknown): CalibrationState {
 
 let nextId = 1;
 
+/**
+ * A finished (or partial) calibration as the panel shows it, from a saved CalibrationResult (an
+ * opened session); `entropy` is the headline of the result it belongs to. Nothing is recomputed.
+ */
+export function calibrationRunOfResult(result: CalibrationResult, entropy: CalibratedAnalysis['entropy']): CalibrationRun {
+  const partial = result.partial;
+  return {
+    id: nextId++,
+    status: partial ? 'cancelled' : 'done',
+    analysis: { input: result.input, settings: result.settings, entropy: { estimate: entropy.estimate, ci95: entropy.ci95 } },
+    replicates: result.replicatesRequested,
+    baseSeed: result.baseSeed,
+    facts: result.model,
+    records: result.records,
+    result,
+    message: partial ? `Saved after ${result.summary.replicates} of ${result.replicatesRequested} replicates: the summary below is partial.` : null,
+  };
+}
+
 export function calibrationActions(store: StoreHandle) {
   const update = (id: number, change: (run: CalibrationRun) => CalibrationRun): void => {
     store.setState((s) => (s.calibration === null || s.calibration.id !== id ? {} : { calibration: change(s.calibration) }));

@@ -1,4 +1,5 @@
 import type { Session } from '../../core';
+import { calibrationRunOfResult } from './calibrationSlice';
 import { restoreReading } from './inputSlice';
 import { describeFailure } from './runSlice';
 import { restoreSettings } from './settingsSlice';
@@ -49,7 +50,8 @@ export function dataCheckText(check: DataCheck): string {
 
 export function sessionActions(store: StoreHandle) {
   return {
-    /** Shows a saved session: its result, settings, reading choices and view, without computing. */
+    /** Shows a saved session: its result, settings, reading choices and view, its calibration and
+     * comparison (or none, for a session without them), without computing. */
     openSession(session: Session): void {
       const { input } = session.result;
       store.setState({
@@ -63,6 +65,8 @@ export function sessionActions(store: StoreHandle) {
         partial: null,
         session: { savedAt: session.savedAt, inputName: input.name, sha256: input.sha256 },
         dataCheck: null,
+        calibration: session.calibration === undefined ? null : calibrationRunOfResult(session.calibration, session.result.entropy),
+        comparisonResult: session.comparison ?? null,
       });
     },
     /** A session file that could not be opened: its reason in the failure alert; the page stays as it was. */

@@ -1,3 +1,4 @@
+import { calibrationBelongsTo } from '../../core';
 import type { AnalysisResult, EstimatorCalibration } from '../../core';
 import type { CalibrationRun } from '../store/calibrationSlice';
 import { formatCount, formatFixed, prettyUnit } from './format';
@@ -30,16 +31,10 @@ export interface CalibrationView {
 
 const DIGITS = 4;
 
-/** The calibration belongs to this result: same input name, SHA-256, length and settings. */
+/** The calibration belongs to this result: same input name, SHA-256, length and settings (compared field by
+ * field, so a session's sorted keys do not make it stale). */
 export function calibrationMatches(run: CalibrationRun, result: AnalysisResult | null): boolean {
-  if (result === null) return false;
-  const a = run.analysis;
-  return (
-    a.input.name === result.input.name &&
-    a.input.sha256 === result.input.sha256 &&
-    a.input.symbols === result.input.symbols &&
-    JSON.stringify(a.settings) === JSON.stringify(result.settings)
-  );
+  return result !== null && calibrationBelongsTo(run.analysis, result);
 }
 
 function signed(x: number | null): string {
