@@ -47,7 +47,7 @@ test('cancel midway keeps the finished replicates as partial and leaves a usable
   await panel.getByLabel('Number of replicates').fill('1000');
   await panel.getByRole('button', { name: 'Calibrate at this N' }).click();
   await expect(panel.getByTestId('calibration-progress')).toContainText(/Replicate ([3-9]|\d\d+) of 1000/, { timeout: 60_000 });
-  await panel.getByRole('button', { name: 'Cancel calibration' }).click();
+  await panel.getByRole('button', { name: 'Stop calibrating' }).click();
   await expect(panel.getByTestId('calibration-progress')).toContainText(/Stopped at \d+ of 1000 replicates \(partial\)/);
   await expect(panel.getByTestId('calibration-message')).toContainText('partial');
   await expect(panel.getByTestId('calibration-table')).toContainText('(partial)');

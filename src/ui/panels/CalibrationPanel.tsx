@@ -49,7 +49,7 @@ export function CalibrationPanel() {
           Calibrate at this N
         </button>
         <button type="button" className="secondary" onClick={calibrationRunner.cancel} disabled={!busy}>
-          Cancel calibration
+          Stop calibrating
         </button>
       </div>
       {v === null ? (
