@@ -71,7 +71,8 @@ describe('diagnostics against exact values', () => {
     const pi = [0.8, 0.2] as const; // THEORY.md section 2 [calc]
     const gaps = [1, 2, 3, 4, 5, 6, 8, 10];
     const seq = markovSource(P.map((row) => [...row])).generate(1_000_000, 2026);
-    const est = estimateBetaMixing(seq.symbols, 2, { blockLength: 1, gaps });
+    // Every pair counted (the default caps pairs at 2^18 with a stride).
+    const est = estimateBetaMixing(seq.symbols, 2, { blockLength: 1, gaps, maxPairs: 1_000_000 });
     expect(est).not.toBeNull();
     if (est === null) return;
     expect(est.blockLength).toBe(1);
@@ -81,8 +82,9 @@ describe('diagnostics against exact values', () => {
       let exact = 0;
       for (const x of [0, 1] as const) for (const y of [0, 1] as const) exact += 0.5 * pi[x] * Math.abs(Pk[x][y] - pi[y]);
       // The noise floor is sqrt(2/pi) times the standard deviation of the cell errors under
-      // independence; dependence between pairs of this chain inflates the variance by at most
-      // (1 + 0.5)/(1 - 0.5) = 3 (second eigenvalue 0.5). 6 floors = 4.8 sd = 2.8 inflated sd.
+      // independence, serial dependence included (Bartlett's variance, betaMixing.ts), so 6 floors
+      // = 4.8 sd; the variance of pairs of this chain is inflated by at most (1 + 0.5)/(1 - 0.5) = 3
+      // (second eigenvalue 0.5), so even an uninflated floor would leave 2.8 inflated sd.
       expect(Math.abs((est.beta[i] ?? Number.NaN) - exact)).toBeLessThan(6 * (est.noiseFloor[i] ?? Number.NaN));
     });
   });
