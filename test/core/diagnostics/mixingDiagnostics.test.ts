@@ -15,7 +15,7 @@ describe('mixingDiagnostics', () => {
     expect(d.beta?.gapsAboveFloor).toBe(0);
     expect(d.beta?.exponential).toBeNull();
     expect(d.reading.verdict).toBe('fast');
-    expect(d.reading.text).toContain('fast enough for the Gaussian band');
+    expect(d.reading.text).toContain('the mixing the limit theorems assume looks plausible');
     expect(d.reading.caveat).toContain('cannot prove mixing');
   });
 
