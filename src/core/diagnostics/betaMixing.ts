@@ -14,6 +14,9 @@ export const MAX_MIXING_PAIRS = 1 << 18;
  * for the noise floor's variance inflation: every lag up to this, read at the gap grid
  * (mixingGaps) and interpolated linearly between its points. */
 export const INFLATION_LAGS = 32;
+/** At most this many sampled positions start the lag pairs of the inflation estimate (every r-th
+ * pair start): autocorrelations of indicators with p >= 1/16 are then within about 1/64 per lag. */
+export const INFLATION_POSITIONS = 1 << 16;
 /** Smallest variance inflation used: the exact factor is a spectral integral, never negative, but
  * its truncated estimate can be; this keeps the floor positive. */
 const MIN_INFLATION = 0.1;
@@ -227,6 +230,7 @@ export function estimateBetaMixing(
   const first = new IndicatorLags(perBlock, lagGrid.length);
   const second = partner === undefined ? first : new IndicatorLags(perBlock, lagGrid.length);
   const high = (perBlock / L) | 0;
+  const every = Math.max(1, Math.ceil(N / stride / INFLATION_POSITIONS));
   const rollCodes = (source: SymbolArray, out: Int32Array, start: number, end: number): void => {
     let code = 0;
     for (let j = 0; j < m - 1; j++) code = code * L + map[source[start + j]];
@@ -237,25 +241,27 @@ export function estimateBetaMixing(
   };
   const countLags = (c: Int32Array, lags: IndicatorLags, start: number, firstT: number, end: number): void => {
     const lastT = Math.min(start + CHUNK - 1, end - 1);
+    const step = stride * every;
+    const t0 = Math.ceil(firstT / step) * step;
     const single = lags.single;
     const same = lags.same;
     const pairsAt = lags.pairsAt;
     const spare = same.length - 1;
-    for (let t = firstT; t <= lastT; t += stride) single[c[t - start]]++;
+    for (let t = t0; t <= lastT; t += step) single[c[t - start]]++;
     for (let i = 0; i < lagGrid.length; i++) {
       const d = lagGrid[i] * stride;
       const top = Math.min(lastT, end - 1 - d);
       const row = (i + 1) * perBlock;
       let n = 0;
       // Branch-free: adds 1 to the row of a when the code d later is a, else to a spare slot.
-      for (let t = firstT - start; t <= top - start; t += stride) {
+      for (let t = t0 - start; t <= top - start; t += step) {
         const a = c[t];
         same[c[t + d] === a ? row + a : spare]++;
         n++;
       }
       pairsAt[i + 1] += n;
     }
-    pairsAt[0] += lastT >= firstT ? Math.floor((lastT - firstT) / stride) + 1 : 0;
+    pairsAt[0] += lastT >= t0 ? Math.floor((lastT - t0) / step) + 1 : 0;
   };
   // Chunks of CHUNK pair starts; codes[i] = code of the m-block at start + i.
   for (let start = 0; start < N; start += CHUNK) {
