@@ -132,8 +132,9 @@ function symbolClasses(symbols: SymbolArray, alphabetSize: number, kept: number)
 }
 
 /**
- * Counts of the block codes at the sampled positions and of equal codes at lags j * stride,
- * j = 1..lags: enough for the autocorrelation of the indicator of each block value.
+ * Counts of the block codes at the lag-pair starts (every r-th sampled position, at most
+ * INFLATION_POSITIONS) and of equal codes LAG_GRID[j] * stride later: enough for the
+ * autocorrelation of the indicator of each block value at those lags.
  */
 class IndicatorLags {
   readonly single: Float64Array;
