@@ -152,10 +152,11 @@ export function analyzeScannedSequence(
   };
   const result = analyzeFromScan(scan, summary, settings, hooks.reference === undefined ? {} : { reference: hooks.reference });
   // Diagnostics need the symbols themselves (the scan keeps only sums): the plug-in order of sigma^2
-  // and the top block length used feed the ACF and the reading.
+  // feeds the ACF, the interval batches (shortest coarse batch) the reading.
+  const { batchLength, batchCount, intervalBatches } = result.scan;
   const diagnostics = mixingDiagnostics(sequence.symbols, sequence.alphabet.length, {
     informationOrder: result.sigma2.alternatives['information-batch-means']?.lengthsUsed?.[0] ?? 1,
-    blockLengthsUsed: Math.max(result.trustedRange?.hi ?? 0, result.entropy.lengthsUsed[1]),
+    ...(intervalBatches > 0 ? { batchLength: Math.floor(batchCount / intervalBatches) * batchLength, intervalBatches } : {}),
   });
   return { ...result, diagnostics };
 }

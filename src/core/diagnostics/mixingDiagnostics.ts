@@ -1,6 +1,7 @@
 import type { SymbolArray } from '../sequence/sequence';
 import { estimateBetaMixing, SIGNAL_FACTOR } from './betaMixing';
-import { fitExponentialDecay, fitPowerDecay, gapsAboveFloor, type DecayFit } from './decayFits';
+import { fitExponentialDecay, fitPowerDecay, fitTailPowerDecay, gapsAboveFloor, type DecayFit } from './decayFits';
+import { INTERVAL_BATCHES } from '../estimate/batchMeans';
 import { informationAutocorrelation } from './informationAutocorrelation';
 import { informationMoments, type InformationMoments } from './informationMoments';
 import { mixingReading, type MixingReading } from './mixingReading';
@@ -23,6 +24,12 @@ export interface DiagnosticsSummary {
     readonly gapsAboveFloor: number;
     readonly exponential: DecayFit | null;
     readonly power: DecayFit | null;
+    /** Power law over the later gaps above the threshold, floor removed (the reading's rate);
+     * absent in results saved before it was added. */
+    readonly tailPower?: DecayFit | null;
+    /** Noise floor over the floor that treats pairs as independent (serial-dependence inflation);
+     * absent in older results. */
+    readonly floorInflation?: number;
     /** How m and the gaps were chosen, and the bias caveat. */
     readonly note: string;
   } | null;
@@ -47,8 +54,10 @@ export interface DiagnosticsSummary {
 export interface DiagnosticsOptions {
   /** Block length k of the conditional information (the one sigma^2 uses). */
   readonly informationOrder: number;
-  /** Top of the block lengths the estimates use (for the reading). */
-  readonly blockLengthsUsed: number;
+  /** Symbols in one batch of the confidence intervals (for the reading); default N / INTERVAL_BATCHES. */
+  readonly batchLength?: number;
+  /** Number of interval batches; default INTERVAL_BATCHES. */
+  readonly intervalBatches?: number;
 }
 
 /**
@@ -79,11 +88,14 @@ export function mixingDiagnostics(symbols: SymbolArray, alphabetSize: number, op
       gapsAboveFloor: above,
       exponential: fitExponentialDecay(est.gaps, est.beta, above),
       power: fitPowerDecay(est.gaps, est.beta, above),
+      tailPower: fitTailPowerDecay(est.gaps, est.beta, est.noiseFloor, above),
+      floorInflation: est.floorInflation,
       note:
         `Block length m = ${est.blockLength}: the largest m with ${est.symbolsKept}^(2m) = ${est.cells} joint cells at most 1/1000 of the ` +
         `${pairs} pairs per gap${est.symbolsKept < alphabetSize ? ` (the ${est.symbolsKept - 1} most frequent symbols kept, the rest merged into one class, which can only lower beta)` : ''}` +
         `${est.stride > 1 ? `; every ${est.stride}th position starts a pair` : ''}. The estimate is biased upward when N is small against the number of cells; ` +
-        `the noise floor is its expected value under independence, and the fits use the leading gaps where beta(k) exceeds ${SIGNAL_FACTOR} x the floor.`,
+        `the noise floor is its expected value under independence (with the variance of serially dependent pairs, x${est.floorInflation.toFixed(2)} here), and the fits use the leading gaps where beta(k) exceeds ${SIGNAL_FACTOR} x the floor; ` +
+        'the reading\'s power-law rate is fitted to beta(k) minus the floor over the later half of those gaps.',
     };
   }
   const reading = mixingReading({
@@ -93,7 +105,9 @@ export function mixingDiagnostics(symbols: SymbolArray, alphabetSize: number, op
     belowFloorFrom: beta === null ? null : belowFrom,
     exponential: beta?.exponential ?? null,
     power: beta?.power ?? null,
-    blockLengthsUsed: Math.max(1, options.blockLengthsUsed),
+    tailPower: beta?.tailPower ?? null,
+    batchLength: Math.max(1, Math.floor(options.batchLength ?? symbols.length / INTERVAL_BATCHES)),
+    intervalBatches: options.intervalBatches ?? INTERVAL_BATCHES,
     acfOutside: acf?.outside ?? null,
     acfExpectedOutside: acf?.expectedOutside ?? null,
   });

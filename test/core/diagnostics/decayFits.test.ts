@@ -1,5 +1,5 @@
 import { describe, expect, test } from 'vitest';
-import { fitExponentialDecay, fitPowerDecay, gapsAboveFloor } from '../../../src/core/diagnostics/decayFits';
+import { fitExponentialDecay, fitPowerDecay, fitTailPowerDecay, gapsAboveFloor } from '../../../src/core/diagnostics/decayFits';
 import { mixingGaps } from '../../../src/core/diagnostics/betaMixing';
 
 describe('decay fits', () => {
@@ -42,5 +42,21 @@ describe('decay fits', () => {
     const beta = [0.1, 0.1, 0.1, 0.1];
     expect(fitExponentialDecay(gaps, beta)?.scale).toBeNull();
     expect(fitPowerDecay(gaps, beta)?.scale).toBeNull();
+  });
+
+  test('the tail power law removes the floor and uses the later half of the gaps on the log scale', () => {
+    // Closed form beta(k) = 0.2 k^-1.5 plus a constant floor 0.001: the excess is an exact power law.
+    const gaps = mixingGaps(64);
+    const floor = gaps.map(() => 0.001);
+    const beta = gaps.map((k) => 0.2 * Math.pow(k, -1.5) + 0.001);
+    const tail = fitTailPowerDecay(gaps, beta, floor);
+    expect(tail?.scale).toBeCloseTo(1.5, 10);
+    // Gaps up to 60; sqrt(1 * 60) = 7.7: the later half starts at gap 8.
+    expect(tail?.gapRange).toEqual([8, 60]);
+    // Without removing the floor the same points look flatter.
+    expect(fitPowerDecay(gaps.slice(7), beta.slice(7))?.scale).toBeLessThan(1.4);
+    // At least three points: over gaps 1..3 the later half is all three.
+    expect(fitTailPowerDecay(gaps, beta, floor, 3)?.gapRange).toEqual([1, 3]);
+    expect(fitTailPowerDecay(gaps, beta, floor, 2)).toBeNull();
   });
 });
