@@ -422,6 +422,13 @@ export const BAD_INPUTS: readonly BadInput[] = [
     expect: { outcome: 'refused', code: 'invalid-field', message: /the session is damaged: result\.input\.symbols should be/, position: 'whole-input' }, browser: true,
   },
   {
+    // The page opens it; the command line once read it as JSON characters without a word.
+    id: 'session-as-sequence', title: 'a workbench session file given to the command line as a sequence', fileName: 'chain.returnrate-session.json', stage: 'session', reader: { format: 'chars' },
+    bytes: () => text(sessionText()),
+    expect: { outcome: 'accepted' },
+    cli: { args: ['analyze', 'FILE'], exit: 1, stderr: /: a workbench session file, not a sequence: open it in the workbench with Open session \(schema returnrate\.session\/1\)$/ },
+  },
+  {
     id: 'session-truncated', title: 'a session file cut off in the middle', fileName: 'cut.returnrate-session.json', stage: 'session', reader: { format: 'chars' },
     bytes: () => {
       const full = sessionText();
