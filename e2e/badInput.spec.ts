@@ -42,7 +42,7 @@ async function chooseSymbolization(page: Page, kind: BadInput): Promise<void> {
   const colon = kind.symbolize.indexOf(':');
   const name = kind.symbolize.slice(0, colon);
   await select.selectOption(name);
-  await page.getByRole('textbox', { name: PARAMETER_LABEL[name] }).fill(kind.symbolize.slice(colon + 1));
+  await page.getByRole('textbox', { name: PARAMETER_LABEL[name] ?? name }).fill(kind.symbolize.slice(colon + 1));
   await page.getByRole('combobox', { name: 'Missing values' }).selectOption(kind.reader.missing ?? 'skip');
 }
 
