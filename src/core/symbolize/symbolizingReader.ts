@@ -1,37 +1,10 @@
 import { ReadError } from '../sequence/readError';
-import type { ReadResult, ReadWarning, ReaderOptions, SequenceReader } from '../sequence/sequenceReader';
+import type { ReadResult, ReaderOptions, SequenceReader } from '../sequence/sequenceReader';
 import { MISSING_POLICIES } from './missingPolicy';
 import { createNumericReader } from './numericSeriesReader';
+import { symbolizationWarning } from './symbolizationWarning';
 import { symbolizeSeries } from './symbolizeSeries';
 import type { SymbolizeSpec } from './symbolizeSpec';
-
-/**
- * A warning when the symbols say less than the numbers: a series with zero range (every value
- * equal) gives one symbol whatever the symbolization, and ties can leave quantile cells empty.
- */
-function oneSymbolWarning(values: Float64Array, spec: SymbolizeSpec, alphabet: readonly string[]): ReadWarning | null {
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = 0; i < values.length; i++) {
-    if (values[i] < min) min = values[i];
-    if (values[i] > max) max = values[i];
-  }
-  const one = `the sequence has the one symbol '${alphabet[0]}' and an entropy rate of 0`;
-  if (values.length > 1 && min === max) {
-    const why =
-      spec.kind === 'quantile'
-        ? `${spec.cells === 2 ? 'the quantile cut point equals' : `the ${spec.cells - 1} quantile cut points all equal`} ${min}, and a value equal to a cut goes to the cell above`
-        : spec.kind === 'threshold'
-          ? 'every value falls in the same cell'
-          : 'every window is all ties, and ties rank in time order';
-    return { code: 'constant-series', message: `all ${values.length} values equal ${min} (zero range): ${why}, so ${one}` };
-  }
-  if (alphabet.length === 1) return { code: 'one-symbol', message: `${spec.kind === 'ordinal' ? 'every window has the same pattern' : 'every value falls in the same cell'}, so ${one}` };
-  if (spec.kind === 'quantile' && alphabet.length < spec.cells) {
-    return { code: 'empty-cells', message: `tied values make some quantile cut points equal: ${spec.cells - alphabet.length} of the ${spec.cells} cells are empty and the sequence has ${alphabet.length} symbols` };
-  }
-  return null;
-}
 
 /**
  * A SequenceReader for real-valued input: reads the numbers (format 'numbers' or 'csv'), then
@@ -70,7 +43,7 @@ export function createSymbolizingReader(options: ReaderOptions & { symbolize: Sy
         const need = spec.kind === 'ordinal' ? `one ordinal pattern of order ${spec.order} with delay ${spec.delay} needs ${(spec.order - 1) * spec.delay + 1} values` : 'too short';
         warnings.push({ code: 'short-segments', message: `left out ${dropped} of the ${series.segments.length} segments as too short: ${need}` });
       }
-      const flat = oneSymbolWarning(series.values, options.symbolize, symbolized.sequence.alphabet);
+      const flat = symbolizationWarning(series.values, options.symbolize, symbolized.sequence.alphabet);
       if (flat !== null) warnings.push(flat);
       if (options.maxSymbols !== undefined && symbolized.sequence.symbols.length > options.maxSymbols) {
         throw new ReadError('too-many-symbols', `the series gives ${symbolized.sequence.symbols.length} symbols, more than the limit of ${options.maxSymbols}`);
