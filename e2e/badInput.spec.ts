@@ -29,6 +29,26 @@ async function drop(page: Page, kind: BadInput): Promise<void> {
   await page.dispatchEvent('.layout', 'drop', { dataTransfer });
 }
 
+/** The page's field label for each symbolization's parameter (src/ui/view/inputOptions.ts). */
+const PARAMETER_LABEL: Readonly<Record<string, string>> = { quantile: 'Cells K', threshold: 'Cut points T1,T2,…', ordinal: 'Order D or D:TAU' };
+
+/** Sets "Symbolize numbers", its parameter and "Missing values" as the kind's spec says (or none). */
+async function chooseSymbolization(page: Page, kind: BadInput): Promise<void> {
+  const select = page.getByRole('combobox', { name: 'Symbolize numbers' });
+  if (kind.symbolize === undefined) {
+    if ((await select.count()) > 0) await select.selectOption('none');
+    return;
+  }
+  const colon = kind.symbolize.indexOf(':');
+  const name = kind.symbolize.slice(0, colon);
+  await select.selectOption(name);
+  await page.getByRole('textbox', { name: PARAMETER_LABEL[name] ?? name }).fill(kind.symbolize.slice(colon + 1));
+  await page.getByRole('combobox', { name: 'Missing values' }).selectOption(kind.reader.missing ?? 'skip');
+}
+
+/** A corpus pattern without its line anchors, for text the page shows among other text. */
+const unanchored = (pattern: RegExp): RegExp => new RegExp(pattern.source.replace(/^\^/, '').replace(/\$$/, ''));
+
 test('dropped bad files get a plain message with their place; the page stays usable and a demo still runs', async ({ page }) => {
   test.setTimeout(240_000);
   expect(BROWSER_BAD_INPUTS.length).toBeGreaterThanOrEqual(8);
@@ -47,6 +67,7 @@ test('dropped bad files get a plain message with their place; the page stays usa
       } else {
         await page.getByRole('combobox', { name: 'Format' }).selectOption(kind.reader.format);
         if (kind.reader.format === 'csv') await page.getByRole('textbox', { name: 'CSV column' }).fill(String(kind.reader.column ?? ''));
+        await chooseSymbolization(page, kind);
         await drop(page, kind);
         await expect(page.getByTestId('preview').getByRole('heading', { level: 2 })).toContainText(kind.fileName);
         await runButton(page).click();
@@ -62,6 +83,7 @@ test('dropped bad files get a plain message with their place; the page stays usa
           await expect(page.getByTestId('run-status')).toHaveText('Idle');
         } else {
           await idleWithEstimate(page, kind.fileName);
+          if (want.warning !== undefined && kind.symbolize !== undefined) await expect(page.getByText(unanchored(want.warning)).first()).toBeVisible();
         }
       }
       await screenshot(page, `bad-input-${kind.id}`, false);

@@ -1,5 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { adviseMemory, analyzeSequence, analyzeSequenceSplit, createDigestingReader, lengthRowOfLevel, longestSegment, memoryAdviceMessage } from '../src/core';
+import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, GroupRunner, InputSummary, LengthRow, LevelStats, ReadResult, ReaderOptions, ScanGroupResult, ScanGroupTask, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
@@ -74,18 +74,9 @@ function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: S
   return { sequence: longest.sequence, warnings: [...read.warnings, { code: 'segment-analysed', message }] };
 }
 
-/**
- * The page's memory budget. A page cannot learn how much memory its worker may take (typed arrays
- * lie outside the JS heap that performance.memory describes), so the rule is a fixed 4 GiB: a
- * 64-bit browser tab holds that, and it takes 10^8 binary symbols (about 1.4 GB) with room to spare.
- */
-const PAGE_MEMORY_BUDGET = 4 * 2 ** 30;
-
-/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget. */
+/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget (core: pageMemoryCheck). */
 function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
-  const input = { symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN };
-  const message = memoryAdviceMessage(adviseMemory(input, PAGE_MEMORY_BUDGET), PAGE_MEMORY_BUDGET, 'a fixed budget', 'page');
-  if (message !== null) throw new RangeError(message);
+  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN });
 }
 
 /** From this many symbols on, a cross-origin isolated page shares the scan among sub-workers. */

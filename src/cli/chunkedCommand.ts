@@ -1,10 +1,12 @@
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { readFile, writeFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
 import { analyzeParts, analyzeSequenceChunked, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk } from '../core';
 import type { AnalysisResult, AnalysisSettings, InputSummary, PartFileContents, ReferenceFacts, Sequence } from '../core';
 import { alphabetSummary } from '../core';
+import { makeFolder } from './makeFolder';
 import { isPositiveInteger, numberOption } from './options';
+import { OutputError } from './outputStream';
 import type { CliIo } from './runCli';
 import { UsageError } from './usageError';
 
@@ -48,7 +50,11 @@ export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSetti
     throw new RangeError(`there is no part ${partOption}: at --chunk ${size} the input has parts 0 to ${plan.chunkCount - 1}`);
   }
   const dir = String(values['parts-out']);
-  await mkdir(dir, { recursive: true });
+  try {
+    await makeFolder(dir);
+  } catch (e) {
+    throw new OutputError(`${dir}: cannot make the folder for the part files: ${e instanceof Error ? e.message : String(e)}`, { cause: e });
+  }
   const listed = alphabetSummary(sequence);
   const input: InputSummary = {
     ...loaded.input,

@@ -2,6 +2,7 @@ import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import { ReadError, createDigestingReader } from '../core';
 import type { ReadResult, ReaderOptions } from '../core';
+import { ownFileRefusal } from './ownFileRefusal';
 
 /** Bytes per read from disk; the reader takes any chunk size, 1 MiB keeps calls few and memory flat. */
 const CHUNK_BYTES = 1 << 20;
@@ -23,6 +24,10 @@ export async function readInputFile(path: string, options: ReaderOptions): Promi
     if (info.isFile()) size = info.size;
   } catch (e) {
     throw fileError(e, path);
+  }
+  if (size !== undefined && options.format !== 'bytes') {
+    const own = await ownFileRefusal(path);
+    if (own !== null) throw own;
   }
   const reader = createDigestingReader(options.sizeHint === undefined && size !== undefined ? { ...options, sizeHint: size } : options);
   try {

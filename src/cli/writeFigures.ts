@@ -1,7 +1,8 @@
-import { mkdir, writeFile } from 'node:fs/promises';
+import { writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { AnalysisResult, CalibrationResult } from '../core';
 import { exportCalibrationFigure, exportDiagnosticFigures, exportFigures, figureCsv, figureSvg } from '../figures';
+import { FolderError, makeFolder } from './makeFolder';
 import { OutputError } from './outputStream';
 
 const REASONS: Readonly<Record<string, string>> = {
@@ -28,9 +29,10 @@ export function writeFailureReason(e: unknown): string {
  */
 export async function writeFigures(result: AnalysisResult, dir: string, note: (line: string) => void, calibration: CalibrationResult | null = null): Promise<string[]> {
   try {
-    await mkdir(dir, { recursive: true });
+    await makeFolder(dir);
   } catch (e) {
-    throw new OutputError(`${dir}: cannot make the figures folder (${writeFailureReason(e)})`, { cause: e });
+    const why = e instanceof FolderError ? e.message : writeFailureReason(e);
+    throw new OutputError(`${dir}: cannot make the figures folder: ${why}`, { cause: e });
   }
   const written: string[] = [];
   const extra = calibration === null ? [] : [exportCalibrationFigure(calibration, result)];

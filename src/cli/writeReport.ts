@@ -1,4 +1,5 @@
-import { writeFile } from 'node:fs/promises';
+import { stat, writeFile } from 'node:fs/promises';
+import { dirname, resolve } from 'node:path';
 import type { AnalysisResult, CalibrationResult } from '../core';
 import { reportHtml } from '../figures';
 import { OutputError } from './outputStream';
@@ -19,6 +20,20 @@ export async function writeReport(
   try {
     await writeFile(path, html, 'utf8');
   } catch (e) {
-    throw new OutputError(`${path}: cannot write the report (${writeFailureReason(e)})`, { cause: e });
+    throw new OutputError(`${path}: cannot write the report (${await missingFolderReason(e, path) ?? writeFailureReason(e)})`, { cause: e });
+  }
+}
+
+/**
+ * ENOENT on writing a file has two causes the user fixes differently: its folder is missing, or the
+ * folder exists and takes no new files (/proc, /sys). Null for other errors.
+ */
+async function missingFolderReason(e: unknown, path: string): Promise<string | null> {
+  if ((e as NodeJS.ErrnoException | null)?.code !== 'ENOENT') return null;
+  const folder = dirname(resolve(path));
+  try {
+    return (await stat(folder)).isDirectory() ? `${folder} takes no new files, ENOENT` : `${folder} is not a folder, ENOENT`;
+  } catch {
+    return `its folder ${folder} does not exist, ENOENT`;
   }
 }

@@ -150,6 +150,7 @@ export { PART_SCHEMA, PartFileError, partFileJson, readPartFile, checkPartsAgree
 export type { PartFacts, PartFileContents } from './result/partFile';
 export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';
 export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
+export { pageMemoryCheck, PAGE_MEMORY_BUDGET_BYTES } from './returns/pageMemoryCheck';
 export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
 export { scanReturnsSplit, scanGroup, classRuns, assignClasses } from './returns/splitScan';
 export type { ScanGroupTask, ScanGroupResult, GroupRunner } from './returns/splitScan';

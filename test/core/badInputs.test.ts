@@ -2,10 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { analyzeSequence } from '../../src/core/analyze';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import { ReadError } from '../../src/core/sequence/readError';
+import { pageMemoryCheck } from '../../src/core/returns/pageMemoryCheck';
 import { readAll } from '../../src/core/sequence/sequenceReader';
 import type { ReadResult } from '../../src/core/sequence/sequenceReader';
 import { readSession } from '../../src/core/session/readSession';
 import { SessionError } from '../../src/core/session/sessionError';
+import { parseSymbolizeSpec } from '../../src/core/symbolize/symbolizeSpec';
 import { BAD_INPUTS } from '../corpus/badInputs';
 import type { BadInput } from '../corpus/badInputs';
 
@@ -23,8 +25,14 @@ function run(kind: BadInput): { read?: ReadResult; h?: number; error?: unknown }
       readSession(new TextDecoder().decode(bytes));
       return {};
     }
-    const read = readAll(bytes, kind.reader);
+    // The spec is parsed as the command line and the page parse it, so a bad spec is refused here.
+    const reader = kind.symbolize === undefined ? kind.reader : { ...kind.reader, symbolize: parseSymbolizeSpec(kind.symbolize) };
+    const read = readAll(bytes, reader);
     if (kind.stage === 'read') return { read };
+    if (kind.stage === 'memory') {
+      pageMemoryCheck({ symbols: read.sequence.symbols.length, alphabetSize: read.sequence.alphabet.length, maxN: kind.settings?.maxN ?? DEFAULT_SETTINGS.maxN }, kind.memoryBudgetBytes);
+      return { read };
+    }
     const result = analyzeSequence(read.sequence, { name: kind.fileName, sha256: null, format: kind.reader.format }, { ...DEFAULT_SETTINGS, maxN: 5, ...kind.settings });
     return { read, h: result.entropy.estimate };
   } catch (error) {
@@ -76,6 +84,7 @@ describe('bad-input corpus through the core', () => {
         const first = Array.from(r.sequence.symbols.subarray(0, want.startsWith.length), (id) => r.sequence.alphabet[id]);
         expect(first).toEqual(want.startsWith);
       }
+      if (want.segments !== undefined) expect(r.records?.length).toBe(want.segments);
       if (want.warning !== undefined) expect(r.warnings.map((w) => w.message).join('\n')).toMatch(want.warning);
       if (want.entropyAtMost !== undefined) {
         expect(h).toBeGreaterThanOrEqual(-1e-12);

@@ -6,6 +6,7 @@ import { readAll } from '../../src/core/sequence/sequenceReader';
 import type { ReaderOptions } from '../../src/core/sequence/sequenceReader';
 import { sessionOf } from '../../src/core/session/session';
 import { writeSession } from '../../src/core/session/writeSession';
+import { NUMERIC_BAD_INPUTS } from './numericBadInputs';
 
 /**
  * The bad-input corpus: every kind of input a user may drop, type or pass that once broke, or
@@ -25,7 +26,9 @@ export type Stage =
   /** read, then analyzeSequence with `settings` */
   | 'analyze'
   /** readSession on the bytes as UTF-8 text */
-  | 'session';
+  | 'session'
+  /** read, then the page's memory check (pageMemoryCheck) with `memoryBudgetBytes` */
+  | 'memory';
 
 /** The input is refused with this error. */
 export interface Refused {
@@ -52,6 +55,8 @@ export interface Accepted {
   readonly warning?: RegExp;
   /** analyze stage: the entropy rate in nats must be at most this (0 for a deterministic sequence) */
   readonly entropyAtMost?: number;
+  /** the segments of a series cut at missing values (ReadResult.records) */
+  readonly segments?: number;
 }
 
 /** How the command line must end on this input. */
@@ -70,6 +75,10 @@ export interface BadInput {
   readonly bytes: () => Uint8Array;
   readonly stage: Stage;
   readonly reader: ReaderOptions;
+  /** A symbolization as typed (`--symbolize`, the page's field): parsed with parseSymbolizeSpec into `reader.symbolize`. */
+  readonly symbolize?: string;
+  /** memory stage: the budget in place of the page's fixed one (the command line's `--max-memory` in its args). */
+  readonly memoryBudgetBytes?: number;
   readonly settings?: Partial<AnalysisSettings>;
   readonly expect: Refused | Accepted;
   /** Absent where the command line has no such input (e.g. sessions, reader-only limits). */
@@ -303,8 +312,8 @@ export const BAD_INPUTS: readonly BadInput[] = [
     cli: { args: ['analyze', 'FILE', '--column', 'a'], exit: 1, stderr: /no rows after the header/ },
   },
   {
-    // TODO(numeric input): main reads the column as labels; with --symbolize, NaN and infinities must be refused with their line.
-    id: 'csv-nan-infinity', title: 'NaN and infinities in a numeric column (labels on main)', fileName: 'nan.csv', bytes: () => text('t,x\n1,0.5\n2,NaN\n3,Infinity\n4,-Infinity\n5,0.5\n'), stage: 'read', reader: { format: 'csv', column: 'x' },
+    // Without --symbolize a column is labels; with it, NaN is missing and infinities are refused (csv-nan-then-infinity).
+    id: 'csv-nan-infinity', title: 'NaN and infinities in a column read as labels (no symbolization)', fileName: 'nan.csv', bytes: () => text('t,x\n1,0.5\n2,NaN\n3,Infinity\n4,-Infinity\n5,0.5\n'), stage: 'read', reader: { format: 'csv', column: 'x' },
     expect: { outcome: 'accepted', symbols: 5, alphabetSize: 4, startsWith: ['0.5', 'NaN', 'Infinity', '-Infinity'] },
     cli: { args: ['analyze', 'FILE', '--column', 'x', '--max-n', '1', '--quiet'], exit: 0 },
   },
@@ -413,6 +422,13 @@ export const BAD_INPUTS: readonly BadInput[] = [
     expect: { outcome: 'refused', code: 'invalid-field', message: /the session is damaged: result\.input\.symbols should be/, position: 'whole-input' }, browser: true,
   },
   {
+    // The page opens it; the command line once read it as JSON characters without a word.
+    id: 'session-as-sequence', title: 'a workbench session file given to the command line as a sequence', fileName: 'chain.returnrate-session.json', stage: 'session', reader: { format: 'chars' },
+    bytes: () => text(sessionText()),
+    expect: { outcome: 'accepted' },
+    cli: { args: ['analyze', 'FILE'], exit: 1, stderr: /: a workbench session file, not a sequence: open it in the workbench with Open session \(schema returnrate\.session\/1\)$/ },
+  },
+  {
     id: 'session-truncated', title: 'a session file cut off in the middle', fileName: 'cut.returnrate-session.json', stage: 'session', reader: { format: 'chars' },
     bytes: () => {
       const full = sessionText();
@@ -420,6 +436,7 @@ export const BAD_INPUTS: readonly BadInput[] = [
     },
     expect: { outcome: 'refused', code: 'not-json', message: /not valid JSON.*line \d+/, position: 'whole-input' },
   },
+  ...NUMERIC_BAD_INPUTS,
 ];
 
 /** The kinds in the workbench subset. */

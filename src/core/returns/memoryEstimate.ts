@@ -81,7 +81,13 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
 export type MemoryAdvice =
   | { readonly kind: 'fits'; readonly estimate: MemoryEstimate }
   | { readonly kind: 'chunk'; readonly estimate: MemoryEstimate; readonly chunkSize: number; readonly chunkEstimate: MemoryEstimate }
-  | { readonly kind: 'too-large'; readonly estimate: MemoryEstimate };
+  | {
+      readonly kind: 'too-large';
+      readonly estimate: MemoryEstimate;
+      /** The smallest chunk the advice would name (2^16, or 4 maxN when larger) and what that run needs: the least memory that takes this input. */
+      readonly smallestChunkSize: number;
+      readonly smallestChunkEstimate: MemoryEstimate;
+    };
 
 /**
  * Checks a run against a budget; when it does not fit, the largest chunk size (a multiple of 2^16,
@@ -95,7 +101,8 @@ export function adviseMemory(input: MemoryEstimateInput, budgetBytes: number): M
   const perPosition = engineBytesPerPosition(input.alphabetSize);
   const step = 1 << 16;
   const chunkSize = Math.floor(spare / perPosition / step) * step;
-  if (chunkSize < Math.max(step, 4 * input.maxN)) return { kind: 'too-large', estimate };
+  const smallest = Math.max(step, 4 * input.maxN);
+  if (chunkSize < smallest) return { kind: 'too-large', estimate, smallestChunkSize: smallest, smallestChunkEstimate: estimatePeakMemory({ ...input, chunkSize: smallest }) };
   return { kind: 'chunk', estimate, chunkSize, chunkEstimate: estimatePeakMemory({ ...input, chunkSize }) };
 }
 
@@ -118,11 +125,22 @@ export function formatBytes(bytes: number): string {
  */
 export function memoryAdviceMessage(advice: MemoryAdvice, budgetBytes: number, budgetSource: string, host: 'cli' | 'page' = 'cli'): string | null {
   if (advice.kind === 'fits') return null;
+  // Too large even in chunks: name the least memory that takes it, so the user knows what machine (or
+  // --max-memory) would; a chunk no smaller than the sequence is no chunked run at all.
+  const least =
+    advice.kind !== 'too-large'
+      ? ''
+      : advice.smallestChunkEstimate.totalBytes < advice.estimate.totalBytes
+        ? `about ${formatBytes(advice.smallestChunkEstimate.totalBytes)}, the smallest chunked run (--chunk ${advice.smallestChunkSize})`
+        : `about ${formatBytes(advice.estimate.totalBytes)}`;
   if (host === 'page') {
-    const what = advice.kind === 'chunk' ? `; the command line can run it in chunks (returnrate analyze FILE --chunk ${advice.chunkSize})` : '';
+    const what =
+      advice.kind === 'chunk'
+        ? `; the command line can run it in chunks (returnrate analyze FILE --chunk ${advice.chunkSize})`
+        : `; the command line can run it where it has ${least}`;
     return `this run needs about ${formatBytes(advice.estimate.totalBytes)} of memory, more than the page's ${formatBytes(budgetBytes)} (${budgetSource})${what}`;
   }
   const need = `this run needs about ${formatBytes(advice.estimate.totalBytes)} but ${formatBytes(budgetBytes)} are available (${budgetSource})`;
-  if (advice.kind === 'too-large') return `${need}; the program and the symbols alone leave no room for a scan`;
+  if (advice.kind === 'too-large') return `${need}; the program and the symbols alone leave no room for a scan: it needs at least ${least}`;
   return `${need}; a chunked run fits: --chunk ${advice.chunkSize} (about ${formatBytes(advice.chunkEstimate.totalBytes)}; returns are then censored at chunk ends)`;
 }

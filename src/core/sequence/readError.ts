@@ -12,6 +12,8 @@ export type ReadErrorCode =
   | 'bad-option'
   | 'bad-csv'
   | 'short-row'
+  /** a file of this program (a session, a result, a part file) given where a sequence belongs */
+  | 'not-a-sequence'
   | 'missing-file'
   | 'unreadable-file';
 

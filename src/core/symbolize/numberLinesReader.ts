@@ -63,6 +63,6 @@ export class NumberLinesReader extends TextReader {
     const kind = numericCellKind(text);
     if (kind === 'number') this.collector.value(Number(text), this.line);
     else if (kind === 'missing') this.collector.missingValue(this.line);
-    else throw numericCellError(kind, text, { line: this.line, column: this.textColumn, byte: this.textByte });
+    else throw numericCellError(kind, text, { line: this.line, column: this.textColumn, byte: this.textByte }, this.collector.untouched);
   }
 }

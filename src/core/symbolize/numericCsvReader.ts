@@ -31,6 +31,6 @@ export class NumericCsvReader extends CsvColumnReader {
     const kind = numericCellKind(text);
     if (kind === 'number') this.collector.value(Number(text), this.cellLine);
     else if (kind === 'missing') this.collector.missingValue(this.cellLine);
-    else throw numericCellError(kind, text, { line: this.cellLine, column: this.cellColumn, byte: this.cellByte });
+    else throw numericCellError(kind, text, { line: this.cellLine, column: this.cellColumn, byte: this.cellByte }, this.collector.untouched);
   }
 }

@@ -42,6 +42,11 @@ export class SeriesCollector {
     this.values.push(x);
   }
 
+  /** True until the first cell (a value or a missing one) has been taken. */
+  get untouched(): boolean {
+    return this.values.length === 0 && this.missing === 0;
+  }
+
   /** A missing value on the given line. */
   missingValue(line: number): void {
     if (this.missing++ === 0) this.firstMissingLine = line;

@@ -60,7 +60,12 @@ export function symbolizeSeries(series: NumericSeries, spec: SymbolizeSpec): Sym
       at += patterns.length;
     }
     if (total === 0) {
-      throw new ReadError('too-short', `no stretch of the series holds the ${span + 1} values one ordinal pattern of order ${spec.order} with delay ${spec.delay} needs`);
+      const need = `one ordinal pattern of order ${spec.order} with delay ${spec.delay} needs ${span + 1} values`;
+      const longest = segments.reduce((m, s) => Math.max(m, s.length), 0);
+      throw new ReadError(
+        'too-short',
+        segments.length === 1 ? `the series holds ${longest} value${longest === 1 ? '' : 's'}, but ${need}` : `the longest of the ${segments.length} segments between missing values holds ${longest} value${longest === 1 ? '' : 's'}, but ${need}`,
+      );
     }
     cellCount = ordinalPatternCount(spec.order);
     labelOf = (cell) => ordinalLabel(cell, spec.order);

@@ -15,9 +15,10 @@ export const MAX_ORDINAL_ORDER = 8;
 const INTEGER = /^\d+$/;
 const DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 
-function wholeNumber(text: string, what: string, spec: string): number {
+/** @param range what the number must be besides whole, e.g. 'from 2 to 1024', so one message says all */
+function wholeNumber(text: string, what: string, range: string, spec: string): number {
   const t = text.trim();
-  if (!INTEGER.test(t)) throw new RangeError(`symbolization '${spec}': ${what} must be a whole number, got '${text}'`);
+  if (!INTEGER.test(t)) throw new RangeError(`symbolization '${spec}': ${what} must be a whole number ${range}, got '${text}'`);
   return Number(t);
 }
 
@@ -35,7 +36,7 @@ export function parseSymbolizeSpec(text: string): SymbolizeSpec {
   switch (kind) {
     case 'quantile': {
       if (rest.trim() === '') throw new RangeError(`symbolization '${spec}': give the number of cells, e.g. quantile:4`);
-      const cells = wholeNumber(rest, 'the number of cells K', spec);
+      const cells = wholeNumber(rest, 'the number of cells K', `from 2 to ${MAX_QUANTILE_CELLS}`, spec);
       if (cells < 2 || cells > MAX_QUANTILE_CELLS) throw new RangeError(`symbolization '${spec}': K must be between 2 and ${MAX_QUANTILE_CELLS}, got ${cells}`);
       return { kind, cells };
     }
@@ -54,9 +55,9 @@ export function parseSymbolizeSpec(text: string): SymbolizeSpec {
     case 'ordinal': {
       const parts = rest.split(':');
       if (rest.trim() === '' || parts.length > 2) throw new RangeError(`symbolization '${spec}': write ordinal:D or ordinal:D:TAU, e.g. ordinal:3`);
-      const order = wholeNumber(parts[0], 'the order D', spec);
+      const order = wholeNumber(parts[0], 'the order D', `from 2 to ${MAX_ORDINAL_ORDER}`, spec);
       if (order < 2 || order > MAX_ORDINAL_ORDER) throw new RangeError(`symbolization '${spec}': the order D must be between 2 and ${MAX_ORDINAL_ORDER}, got ${order}`);
-      const delay = parts.length === 2 ? wholeNumber(parts[1], 'the delay TAU', spec) : 1;
+      const delay = parts.length === 2 ? wholeNumber(parts[1], 'the delay TAU', 'of at least 1', spec) : 1;
       if (delay < 1) throw new RangeError(`symbolization '${spec}': the delay TAU must be at least 1, got ${delay}`);
       return { kind, order, delay };
     }

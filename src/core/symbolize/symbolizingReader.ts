@@ -1,6 +1,8 @@
 import { ReadError } from '../sequence/readError';
 import type { ReadResult, ReaderOptions, SequenceReader } from '../sequence/sequenceReader';
+import { MISSING_POLICIES } from './missingPolicy';
 import { createNumericReader } from './numericSeriesReader';
+import { symbolizationWarning } from './symbolizationWarning';
 import { symbolizeSeries } from './symbolizeSeries';
 import type { SymbolizeSpec } from './symbolizeSpec';
 
@@ -11,6 +13,10 @@ import type { SymbolizeSpec } from './symbolizeSpec';
  * (the shape of FASTA records), to be analysed apart.
  */
 export function createSymbolizingReader(options: ReaderOptions & { symbolize: SymbolizeSpec }): SequenceReader {
+  const { missing } = options;
+  if (missing !== undefined && !MISSING_POLICIES.includes(missing)) {
+    throw new ReadError('bad-option', `the missing-value policy must be ${MISSING_POLICIES.map((p) => `'${p}'`).join(' or ')}; got '${String(missing)}'`);
+  }
   const numeric = createNumericReader(options);
   let lineFeeds = 0;
   let lastByte = -1;
@@ -26,12 +32,19 @@ export function createSymbolizingReader(options: ReaderOptions & { symbolize: Sy
       const { series } = read;
       const warnings = [...read.warnings];
       if (series.missing > 0) {
-        const what = series.missingPolicy === 'skip' ? 'dropped them and joined the values around them' : `cut the series into ${symbolized.records.length} segment${symbolized.records.length === 1 ? '' : 's'} there`;
+        // The segments as cut, before any too short for an ordinal pattern are left out.
+        const cut = series.segments.length;
+        const what = series.missingPolicy === 'skip' ? 'dropped them and joined the values around them' : `cut the series into ${cut} segment${cut === 1 ? '' : 's'} there`;
         warnings.push({ code: 'missing-values', message: `${series.missing} missing value${series.missing === 1 ? '' : 's'} (first at line ${series.firstMissingLine}): ${what}` });
       }
       if (symbolized.record.segmentsDropped > 0) {
-        warnings.push({ code: 'short-segments', message: `${symbolized.record.segmentsDropped} segment(s) too short for one ordinal pattern were left out` });
+        const dropped = symbolized.record.segmentsDropped;
+        const spec = options.symbolize;
+        const need = spec.kind === 'ordinal' ? `one ordinal pattern of order ${spec.order} with delay ${spec.delay} needs ${(spec.order - 1) * spec.delay + 1} values` : 'too short';
+        warnings.push({ code: 'short-segments', message: `left out ${dropped} of the ${series.segments.length} segments as too short: ${need}` });
       }
+      const flat = symbolizationWarning(series.values, options.symbolize, symbolized.sequence.alphabet);
+      if (flat !== null) warnings.push(flat);
       if (options.maxSymbols !== undefined && symbolized.sequence.symbols.length > options.maxSymbols) {
         throw new ReadError('too-many-symbols', `the series gives ${symbolized.sequence.symbols.length} symbols, more than the limit of ${options.maxSymbols}`);
       }

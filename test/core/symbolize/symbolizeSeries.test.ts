@@ -72,7 +72,7 @@ describe('symbolizeSeries', () => {
     const s = symbolizeSeries(series([1, 2, 3, 4, 5, 6], [[0, 2], [2, 4]]), { kind: 'ordinal', order: 3, delay: 1 });
     expect(s.record.segmentsDropped).toBe(1);
     expect(s.records).toEqual([{ name: 'segment 2', start: 0, length: 2 }]);
-    expect(() => symbolizeSeries(series([1, 2]), { kind: 'ordinal', order: 3, delay: 1 })).toThrow(/no stretch/);
+    expect(() => symbolizeSeries(series([1, 2]), { kind: 'ordinal', order: 3, delay: 1 })).toThrow(/the series holds 2 values, but one ordinal pattern of order 3 with delay 1 needs 3 values/);
   });
 
   it('quantile:2 on a Gaussian AR(1) with phi = 0.5 keeps the same symbol on consecutive values with probability 2/3', () => {
