@@ -110,7 +110,7 @@ test('a demo opens from the gallery by keyboard and shows its exact values; sett
   await page.goto('/');
   await idleWithEstimate(page, 'Hill-top station wind sectors (invented)');
   const gallery = page.getByRole('list', { name: 'Demos' });
-  await expect(gallery.getByRole('listitem')).toHaveCount(8);
+  await expect(gallery.getByRole('listitem')).toHaveCount(10);
   await expect(page.getByTestId('gallery-h-stirred-tank')).toHaveText('0.693147 nat/symbol');
   const choose = page.getByRole('button', { name: 'Choose Chaotic stirring tank probe (invented)' });
   await choose.focus();
