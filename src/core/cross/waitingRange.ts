@@ -17,9 +17,10 @@ export interface WaitingRange {
  * from B) and at least 100 observed waits; the bottom is n_hi - (SLOPE_LEVELS - 1), since
  * E log W_n - n H(P, Q) settles to a constant as n grows (Kontoyiannis 1998: log W_n = -log Q(A_1^n)
  * + O(log n) almost surely, and for the sources tested here the remainder's mean converges), so the
- * top levels carry the least drift. Four levels rather than two: with 16 segment pairs that gave the
- * coverage closest to 0.95 in scripts/cross-coverage-study.ts (DEVELOPERS.md has the table); the
- * wider fit halves the noise of the top-two difference, which the batch means understated.
+ * top levels carry the least drift. Four levels rather than two: with 8 segment pairs that gave the
+ * coverage closest to 0.95 in scripts/cross-coverage-study.ts (DEVELOPERS.md has the table). The
+ * wider fit steadies the slope: for the chain pair the spread of (estimate - H) / SE (which should
+ * be 1) was 1.8 to 2.7 with two levels and 1.5 to 1.7 with four (8 pairs, 1e5 symbols).
  */
 /** Trusted levels the waiting-time slope is fitted over (the top ones). */
 export const SLOPE_LEVELS = 4;
