@@ -251,7 +251,7 @@ export function ComparePanel() {
           Stop comparing
         </button>
       </div>
-      <p className="status" role="status" aria-live="polite" data-testid="compare-progress">
+      <p className="status" aria-live="polite" data-testid="compare-progress">
         <span className={`badge badge-${run.status}`}>{view.status}</span>
         <span>{view.detail}</span>
       </p>
