@@ -142,7 +142,7 @@ function ComparisonEstimates({ result }: { readonly result: ComparisonResult }) 
   const cross = lines.find((l) => l.id === 'cross');
   return (
     <>
-      <p className="input-name" data-testid="compare-names">
+      <p className="compare-names" data-testid="compare-names">
         A: {result.inputA.name} · B: {result.inputB.name}
       </p>
       <p className="muted">
