@@ -93,7 +93,7 @@ test('a long run shows n of maxN, positions in play, elapsed and time left; canc
   await page.getByRole('combobox', { name: 'Unit' }).selectOption('bit');
   await expect(page.getByRole('combobox', { name: 'Unit' })).toHaveValue('bit');
   await screenshot(page, 'intake-4-running', false);
-  await page.getByRole('button', { name: 'Cancel' }).click();
+  await page.getByRole('button', { name: 'Cancel', exact: true }).click();
   await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 5_000 });
   await expect(page.getByRole('status')).toContainText('Cancelled');
   await expect(page.locator('.input-name')).toHaveText('Hill-top station wind sectors (invented)');
@@ -110,7 +110,7 @@ test('a demo opens from the gallery by keyboard and shows its exact values; sett
   await page.goto('/');
   await idleWithEstimate(page, 'Hill-top station wind sectors (invented)');
   const gallery = page.getByRole('list', { name: 'Demos' });
-  await expect(gallery.getByRole('listitem')).toHaveCount(8);
+  await expect(gallery.getByRole('listitem')).toHaveCount(10);
   await expect(page.getByTestId('gallery-h-stirred-tank')).toHaveText('0.693147 nat/symbol');
   const choose = page.getByRole('button', { name: 'Choose Chaotic stirring tank probe (invented)' });
   await choose.focus();

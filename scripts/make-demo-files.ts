@@ -20,7 +20,12 @@ interface DemoFile {
   readonly seed: number;
 }
 
-const FILES: readonly DemoFile[] = [{ file: 'hilltop-wind-sectors.txt', scenario: 'hilltop-wind', length: 50_000, seed: 1_903 }];
+const FILES: readonly DemoFile[] = [
+  { file: 'hilltop-wind-sectors.txt', scenario: 'hilltop-wind', length: 50_000, seed: 1_903 },
+  // A pair for "Compare two sequences": the same invented syllables, two invented dialects.
+  { file: 'bird-song-upper-valley.txt', scenario: 'song-upper-valley', length: 50_000, seed: 8_101 },
+  { file: 'bird-song-lower-valley.txt', scenario: 'song-lower-valley', length: 50_000, seed: 8_102 },
+];
 
 /** A generated sequence as whitespace-separated tokens (the 'tokens' reader format). */
 function tokensText(symbols: ArrayLike<number>, labels: readonly string[]): string {

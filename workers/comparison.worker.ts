@@ -1,11 +1,16 @@
 import { expose, releaseProxy } from 'comlink';
 import { compareSequences, createDigestingReader, crossReferenceOfSpecs, parseSourceSpec } from '../src/core';
+import { demoScenario } from './demoScenarios';
 import type { AnalysisSettings, ComparisonInputFacts, ComparisonResult, ReaderOptions, Sequence } from '../src/core';
 
 /** One side of a comparison: a file (streamed here) or a reference source generated here. */
 export type ComparisonSide =
   | { readonly kind: 'file'; readonly blob: Blob; readonly options: ReaderOptions & { readonly name: string } }
-  | { readonly kind: 'source'; readonly spec: string; readonly length: number; readonly seed: number };
+  | { readonly kind: 'source'; readonly spec: string; readonly length: number; readonly seed: number }
+  | { readonly kind: 'demo'; readonly id: string; readonly length: number; readonly seed: number };
+
+/** Gallery ids of reference sources are 'source:' + the core's spec. */
+const REFERENCE_PREFIX = 'source:';
 
 /** Which stage runs and how far it is: reading, A alone by block length, then the segment pairs. */
 export interface ComparisonProgress {
@@ -22,6 +27,16 @@ async function load(side: ComparisonSide): Promise<{ sequence: Sequence; facts: 
       sequence: source.generate(side.length, side.seed),
       facts: { name: `${source.label} (${side.length} symbols, seed ${side.seed})`, sha256: null, format: 'generated' },
       spec: source.id,
+    };
+  }
+  if (side.kind === 'demo') {
+    const scenario = demoScenario(side.id);
+    const sequence = scenario.source.generate(side.length, side.seed);
+    return {
+      sequence: scenario.labels === null ? sequence : { ...sequence, alphabet: scenario.labels },
+      facts: { name: `${scenario.title} (${side.length} symbols, seed ${side.seed})`, sha256: null, format: 'generated' },
+      // Exact values only for the core's reference sources; invented stories are stories.
+      spec: scenario.kind === 'reference' && side.id.startsWith(REFERENCE_PREFIX) ? parseSourceSpec(side.id.slice(REFERENCE_PREFIX.length)).id : null,
     };
   }
   const { name, ...options } = side.options;

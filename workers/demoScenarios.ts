@@ -157,6 +157,55 @@ const TWO_STATE_WEATHER: DemoScenario = {
   source: withLabels(markovSource(WEATHER_MATRIX), ['D', 'W']),
 };
 
+/** Syllables of the invented bird song, shared by both valleys so the two can be compared symbol by symbol. */
+export const SONG_SYLLABLES: readonly string[] = ['ti', 'tu', 'chip', 'wee', 'trr'];
+
+/**
+ * Invented song grammar of the upper valley: phrases run ti -> tu -> chip and often close on a wee,
+ * trills are rare. Our own numbers; rows sum to 1 and every transition is possible, so either
+ * valley's blocks can occur in the other's song (the cross entropy is finite).
+ */
+export const UPPER_VALLEY_SONG = [
+  [0.1, 0.6, 0.15, 0.1, 0.05],
+  [0.1, 0.1, 0.6, 0.15, 0.05],
+  [0.2, 0.05, 0.1, 0.6, 0.05],
+  [0.6, 0.15, 0.1, 0.1, 0.05],
+  [0.4, 0.2, 0.2, 0.1, 0.1],
+];
+
+/** Invented dialect of the lower valley: the same syllables, but chip repeats and trills close phrases. */
+export const LOWER_VALLEY_SONG = [
+  [0.2, 0.3, 0.3, 0.1, 0.1],
+  [0.1, 0.2, 0.4, 0.1, 0.2],
+  [0.1, 0.05, 0.45, 0.1, 0.3],
+  [0.3, 0.3, 0.1, 0.2, 0.1],
+  [0.5, 0.1, 0.1, 0.2, 0.1],
+];
+
+const UPPER_VALLEY: DemoScenario = {
+  id: 'song-upper-valley',
+  kind: 'invented',
+  seed: 7_331,
+  title: 'Bird-song syllables, upper valley (invented)',
+  story:
+    'Syllables (ti, tu, chip, wee, trr) of a songbird in a fictional upper valley, drawn from a Markov chain of our own design: ' +
+    'phrases run ti, tu, chip and close on wee. Pair it with the lower valley in "Compare two sequences"; not recordings.',
+  labels: SONG_SYLLABLES,
+  source: withLabels(markovSource(UPPER_VALLEY_SONG), SONG_SYLLABLES),
+};
+
+const LOWER_VALLEY: DemoScenario = {
+  id: 'song-lower-valley',
+  kind: 'invented',
+  seed: 7_457,
+  title: 'Bird-song syllables, lower valley (invented)',
+  story:
+    'The same invented songbird one valley down, with a dialect of our own making: chip repeats and trills close phrases. ' +
+    'Same five syllables as the upper valley, so the two songs can be compared; generated, not recorded.',
+  labels: SONG_SYLLABLES,
+  source: withLabels(markovSource(LOWER_VALLEY_SONG), SONG_SYLLABLES),
+};
+
 /** A reference source of the core as a gallery entry; the spec goes through the core's parser. */
 function reference(spec: string, title: string, story: string, seed: number): DemoScenario {
   return { id: `source:${spec}`, kind: 'reference', title, story, labels: null, source: parseSourceSpec(spec), seed };
@@ -181,6 +230,8 @@ const SCENARIOS: readonly DemoScenario[] = [
   HILLTOP_WIND,
   STIRRED_TANK,
   TWO_STATE_WEATHER,
+  UPPER_VALLEY,
+  LOWER_VALLEY,
 ];
 
 /** Every gallery entry, reference sources first. */

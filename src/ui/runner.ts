@@ -30,7 +30,15 @@ export interface Runner {
   /** The input of the shown result (the File and its reading options, or the demo), while this page
    * still holds it; null after a reload or an opened session. The calibration reads it again. */
   calibrationInput(): CalibrationInput | null;
+  /** What the next run would read: the open File, or the chosen demo at the current demo length (the
+   * default demo when nothing is chosen); null when the chosen file is no longer held (after a reload). */
+  currentInput(): CurrentInput | null;
 }
+
+/** The Input panel's current input, for other runners (the comparison takes it as sequence A). */
+export type CurrentInput =
+  | { readonly kind: 'file'; readonly file: File }
+  | { readonly kind: 'demo'; readonly id: string; readonly length: number; readonly seed: number };
 
 /** Bytes of a file's head searched for a session's schema field; the writer puts it first. */
 const SESSION_HEAD_BYTES = 256;
@@ -194,6 +202,12 @@ export function createRunner(client: AnalysisClient, store: StoreHandle): Runner
       return { name: sessionFileName(result.input.name), text };
     },
     calibrationInput: () => (lastRun !== null && lastRun.result === store.getState().result ? lastRun.input : null),
+    currentInput: () => {
+      const { chosen, demoLength } = store.getState();
+      if (chosen?.kind === 'file') return file === null ? null : { kind: 'file', file };
+      if (chosen?.kind === 'demo') return { kind: 'demo', id: chosen.id, length: demoLength, seed: chosen.seed };
+      return { kind: 'demo', id: DEFAULT_DEMO.id, length: demoLength, seed: DEFAULT_DEMO.seed };
+    },
   };
 }
 

@@ -57,6 +57,22 @@ describe('runner', () => {
     expect(s.store.getState().chosen).toEqual({ kind: 'demo', id: DEFAULT_DEMO.id, length: 5_000, seed: DEFAULT_DEMO.seed });
   });
 
+  it('currentInput is what the next run reads: the default demo, a chosen demo at the current length, the open file', async () => {
+    const s = testStore();
+    const { client } = fakeClient();
+    const runner = createRunner(client, s.store);
+    s.setDemoLength(6_000);
+    expect(runner.currentInput()).toEqual({ kind: 'demo', id: DEFAULT_DEMO.id, length: 6_000, seed: DEFAULT_DEMO.seed });
+    runner.chooseDemo('stirred-tank');
+    s.setDemoLength(8_000);
+    expect(runner.currentInput()).toMatchObject({ kind: 'demo', id: 'stirred-tank', length: 8_000 });
+    const file = new File(['x y'], 'seq.txt');
+    await runner.openFile(file);
+    expect(runner.currentInput()).toEqual({ kind: 'file', file });
+    // A file named by a reloaded page is no longer held.
+    expect(createRunner(client, s.store).currentInput()).toBeNull();
+  });
+
   it('chooseDemo picks a gallery entry with its own seed; run generates it', async () => {
     const s = testStore();
     const { client, calls } = fakeClient();

@@ -3,10 +3,16 @@ import type { ComparisonResult } from '../../core';
 import type { ComparisonProgress } from '../comparisonClient';
 import type { StoreHandle } from './store';
 
-/** One side of a comparison as the page shows it: a file (kept by the comparison runner) or a reference source. */
+/**
+ * One side of a comparison as the page shows it: a file (kept by the comparison runner), a reference
+ * source of the core, a gallery entry (reference or invented, generated at `length`), or, for A, the
+ * input loaded in the Input panel (resolved when the comparison starts).
+ */
 export type CompareSideChoice =
   | { readonly kind: 'file'; readonly name: string; readonly bytes: number }
-  | { readonly kind: 'source'; readonly spec: string; readonly label: string; readonly length: number };
+  | { readonly kind: 'source'; readonly spec: string; readonly label: string; readonly length: number }
+  | { readonly kind: 'demo'; readonly id: string; readonly label: string; readonly length: number }
+  | { readonly kind: 'input' };
 
 export type ComparisonStatus = 'idle' | 'running' | 'cancelled' | 'failed';
 
@@ -17,6 +23,8 @@ export interface ComparisonRunState {
   readonly progress: ComparisonProgress | null;
   /** Why the last comparison failed, or a note after a cancel. */
   readonly message: string | null;
+  /** Clock time (ms) the running comparison started; null when none has run. */
+  readonly startedAtMs?: number | null;
 }
 
 export interface ComparisonState {
@@ -48,8 +56,14 @@ export function comparisonActions(store: StoreHandle) {
     chooseCompareSide(which: 'A' | 'B', side: CompareSideChoice | null): void {
       run(which === 'A' ? { sideA: side } : { sideB: side });
     },
-    beginComparison(): void {
-      run({ status: 'running', progress: null, message: null });
+    /** New length (symbols) for a generated side; other sides are left as they are. */
+    setCompareLength(which: 'A' | 'B', length: number): void {
+      const side = which === 'A' ? store.getState().comparisonRun.sideA : store.getState().comparisonRun.sideB;
+      if (side === null || (side.kind !== 'demo' && side.kind !== 'source')) return;
+      run(which === 'A' ? { sideA: { ...side, length } } : { sideB: { ...side, length } });
+    },
+    beginComparison(nowMs: number = Date.now()): void {
+      run({ status: 'running', progress: null, message: null, startedAtMs: nowMs });
     },
     reportComparisonProgress(progress: ComparisonProgress): void {
       if (store.getState().comparisonRun.status === 'running') run({ progress });

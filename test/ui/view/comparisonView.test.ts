@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ComparisonResult } from '../../../src/core';
-import { comparisonLines, comparisonProgressText, sideText } from '../../../src/ui/view/comparisonView';
+import { comparisonLines, comparisonProgressText, comparisonProgressView, sideText } from '../../../src/ui/view/comparisonView';
 
 const rate = (estimate: number | null, ci: [number, number] | null) => ({ estimate, ci95: ci, standardError: null, lengthsUsed: null, note: 'n' });
 
@@ -25,5 +25,22 @@ describe('comparison view', () => {
     expect(sideText({ kind: 'file', name: 'a.txt', bytes: 1234 })).toBe('file “a.txt” (1,234 bytes)');
     expect(sideText({ kind: 'source', spec: 'coin', label: 'Fair coin', length: 200000 })).toBe('Fair coin, 200,000 symbols');
     expect(comparisonProgressText({ stage: 'waiting', done: 3, total: 32 })).toBe('Waiting times of A in B: segment pair 3 of 32');
+    expect(sideText({ kind: 'input' })).toBe('the input loaded above (read when the comparison starts)');
+    expect(sideText({ kind: 'demo', id: 'x', label: 'Valley', length: 30000 })).toBe('Valley, 30,000 symbols');
+  });
+
+  it('shows progress like the Run panel: block length n of maxN on the bar, and the elapsed time', () => {
+    const base = { sideA: null, sideB: null, message: null, startedAtMs: 1_000 };
+    const running = { ...base, status: 'running' as const, progress: { stage: 'entropy-a' as const, done: 7, total: 40 } };
+    expect(comparisonProgressView(running, 4_000)).toEqual({
+      status: 'Running',
+      detail: 'Entropy rate of A: block length n = 7 of at most 40',
+      value: 7,
+      max: 40,
+      elapsed: expect.stringMatching(/elapsed$/),
+    });
+    expect(comparisonProgressView({ ...running, progress: { stage: 'read', done: 0, total: 2 } }, 4_000).value).toBeNull();
+    expect(comparisonProgressView({ ...base, status: 'idle', progress: null }, 4_000)).toMatchObject({ status: 'Idle', elapsed: null });
+    expect(comparisonProgressView({ ...base, status: 'cancelled', progress: null }, 4_000).status).toBe('Stopped');
   });
 });

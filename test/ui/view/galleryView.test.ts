@@ -1,7 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { markovEntropyRate } from '../../../src/core/sources/markovEntropy';
 import { galleryView } from '../../../src/ui/view/galleryView';
-import { DEMO_SCENARIOS, demoScenario, hilltopWindMatrix } from '../../../workers/demoScenarios';
+import {
+  DEMO_SCENARIOS,
+  demoScenario,
+  hilltopWindMatrix,
+  LOWER_VALLEY_SONG,
+  SONG_SYLLABLES,
+  UPPER_VALLEY_SONG,
+} from '../../../workers/demoScenarios';
 
 /** Binary entropy in nats. */
 const H2 = (p: number): number => -p * Math.log(p) - (1 - p) * Math.log(1 - p);
@@ -11,7 +18,7 @@ function facts(id: string) {
 }
 
 describe('demo gallery catalogue', () => {
-  it('holds the five reference sources of the brief and three invented stories', () => {
+  it('holds the five reference sources of the brief and five invented stories (two of them a pair for comparing)', () => {
     expect(DEMO_SCENARIOS.map((d) => `${d.kind}:${d.id}`)).toEqual([
       'reference:source:coin',
       'reference:source:markov:0.9,0.1;0.4,0.6',
@@ -21,6 +28,8 @@ describe('demo gallery catalogue', () => {
       'invented:hilltop-wind',
       'invented:stirred-tank',
       'invented:dry-wet-days',
+      'invented:song-upper-valley',
+      'invented:song-lower-valley',
     ]);
     for (const d of DEMO_SCENARIOS) expect(d.title.includes('(invented)')).toBe(d.kind === 'invented');
   });
@@ -46,6 +55,17 @@ describe('demo gallery catalogue', () => {
     // Dry/wet chain [[0.85, 0.15], [0.3, 0.7]]: pi = (2/3, 1/3) from 0.15 pi_D = 0.3 pi_W (Cover and Thomas 2006, Theorem 4.2.4).
     expect(facts('dry-wet-days').entropyRate).toBeCloseTo((2 / 3) * H2(0.15) + (1 / 3) * H2(0.3), 12);
     expect(facts('hilltop-wind').entropyRate).toBe(markovEntropyRate(hilltopWindMatrix()));
+    expect(facts('song-upper-valley').entropyRate).toBeCloseTo(markovEntropyRate(UPPER_VALLEY_SONG), 12);
+    expect(facts('song-lower-valley').entropyRate).toBeCloseTo(markovEntropyRate(LOWER_VALLEY_SONG), 12);
+    // The valley pair shares one alphabet and every transition is possible, so each song's blocks
+    // can occur in the other's and the cross entropy is finite (common practice, no source).
+    for (const m of [UPPER_VALLEY_SONG, LOWER_VALLEY_SONG]) {
+      expect(m).toHaveLength(SONG_SYLLABLES.length);
+      for (const row of m) {
+        expect(row.every((p) => p > 0)).toBe(true);
+        expect(row.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 12);
+      }
+    }
   });
 
   it('the cards show the exact values in the chosen unit and mark invented stories', () => {
@@ -55,6 +75,6 @@ describe('demo gallery catalogue', () => {
     expect(coin).toMatchObject({ entropy: '0.693147 nat/symbol', sigma2: '0.000000 nat²/symbol', badge: 'Reference source', invented: false });
     expect(bits.find((i) => i.id === 'source:coin')?.entropy).toBe('1.000000 bit/symbol');
     expect(nats.find((i) => i.id === 'source:renewal:1.5')?.sigma2).toBe('none claimed');
-    expect(nats.filter((i) => i.invented).map((i) => i.badge)).toEqual(['Invented story', 'Invented story', 'Invented story']);
+    expect(nats.filter((i) => i.invented).map((i) => i.badge)).toEqual(Array.from({ length: 5 }, () => 'Invented story'));
   });
 });
