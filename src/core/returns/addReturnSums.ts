@@ -1,18 +1,13 @@
+import type { LevelStats } from './levelStats';
+
 /**
  * The scalar sums over the positions of one level that both LevelStats and the engine's LevelSums
  * carry: sum c log c over blocks, and the counts, sums and sums of squares of log R.
  */
-export interface ReturnSums {
-  readonly sumCountLogCount: number;
-  readonly forwardObserved: number;
-  readonly forwardSumLog: number;
-  readonly forwardSumLog2: number;
-  readonly observed: number;
-  readonly sumLog: number;
-  readonly sumLog2: number;
-  readonly sumLogRc: number;
-  readonly sumLogRc2: number;
-}
+export type ReturnSums = Pick<
+  LevelStats,
+  'sumCountLogCount' | 'forwardObserved' | 'forwardSumLog' | 'forwardSumLog2' | 'observed' | 'sumLog' | 'sumLog2' | 'sumLogRc' | 'sumLogRc2'
+>;
 
 /**
  * The sums of two disjoint sets of positions, added field by field into a new object. Every field
