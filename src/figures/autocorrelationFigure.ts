@@ -8,6 +8,7 @@ import { BAND_OPACITY } from './palette';
 import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry, STYLES } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 const ACF_STYLE = { colour: 'cobalt', dash: '', width: 1.5, marker: 'circle' } as const;
 
@@ -63,23 +64,18 @@ export function autocorrelationFigure(diagnostics: DiagnosticsSummary | undefine
       { id: 'band', label: 'Band half-width', value: readoutNumber(a.band) },
     ],
   }));
-  return {
-    kind: 'figure',
-    model: {
-      title: 'Autocorrelation of the information increments',
-      description: `Sample autocorrelation of Y_t = −log p̂(x_t | ${a.order - 1} previous symbols), centred, at lags 1–${L}, with the white-noise band ±1.96/√n.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [bandMark],
-      pathLayer: null,
-      lines: [zeroLine],
-      points,
-      legend,
-      readout,
-      notes: [a.note],
-    },
-  };
+  return figureOf({
+    title: 'Autocorrelation of the information increments',
+    description: `Sample autocorrelation of Y_t = −log p̂(x_t | ${a.order - 1} previous symbols), centred, at lags 1–${L}, with the white-noise band ±1.96/√n.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    bands: [bandMark],
+    lines: [zeroLine],
+    points,
+    legend,
+    readout,
+    notes: [a.note],
+  });
 }

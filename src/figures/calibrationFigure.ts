@@ -6,6 +6,7 @@ import { linearAxis, round2 } from './linearAxis';
 import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 /** Looks of the calibration figure; covering and missing intervals differ by dash as well as colour. */
 export const CALIBRATION_STYLES = {
@@ -89,25 +90,17 @@ export function calibrationFigure(cal: CalibrationResult, size: FigureSize, whic
     ...lines.filter((l) => l.path !== '').map((l) => legendEntry(l.id, l.label, 'line', l.style)),
   ];
   const coverage = summary.coverage === null ? 'no intervals' : `${summary.covered} of ${summary.intervals} intervals contain it`;
-  return {
-    kind: 'figure',
-    model: {
-      title: `Surrogate estimates of ${name} at N = ${cal.input.symbols}`,
-      description:
-        `${rows.length} estimates of ${name} from surrogates of the fitted order-${cal.model.order} Markov chain, sorted, with their intervals; ` +
-        `exact value ${readoutNumber(exact)}, mean ${readoutNumber(summary.mean)}; ${coverage}.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [],
-      pathLayer: null,
-      lines,
-      points: [points],
-      legend,
-      readout: [],
-      notes: [],
-    },
-  };
+  return figureOf({
+    title: `Surrogate estimates of ${name} at N = ${cal.input.symbols}`,
+    description:
+      `${rows.length} estimates of ${name} from surrogates of the fitted order-${cal.model.order} Markov chain, sorted, with their intervals; ` +
+      `exact value ${readoutNumber(exact)}, mean ${readoutNumber(summary.mean)}; ${coverage}.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    lines,
+    points: [points],
+    legend,
+  });
 }

@@ -20,6 +20,7 @@ import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { rateNats } from './rateNats';
 import { legendEntry } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 /** Fewest values for which the tests and pictures are worth showing (common practice, no source). */
 export const MIN_FLUCTUATION_VALUES = 3;
@@ -151,33 +152,27 @@ export function fluctuationQuantileFigure(statistics: FluctuationStatistics, siz
     legendEntry(band.id, band.label, 'band', null, band.colour),
     legendEntry(identity.id, identity.label, 'line', identity.style),
   ];
-  return {
-    kind: 'figure',
-    model: {
-      title: `Q-Q plot against N(0,1) at n = ${statistics.n}`,
-      description: `Sorted normalized fluctuations ${FLUCTUATION_LABEL} of ${q.size} sampled positions against N(0,1) quantiles, with the pointwise ${levelText} band and the identity line.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [band],
-      pathLayer: null,
-      lines: [identity],
-      points: [points],
-      legend,
-      readout: Array.from(q.theoretical, (t, i) => ({
-        n: i,
-        x: round2(x(t)),
-        heading: { id: 'quantile', label: 'N(0,1) quantile', value: readoutNumber(t) },
-        rows: [
-          { id: 'value', label: `Sorted value (rank ${q.rank[i] ?? 0} of ${q.size})`, value: readoutNumber(q.sample[i] ?? null) },
-          { id: 'band', label: `${levelText} band`, value: `${readoutNumber(q.lower[i] ?? null)} to ${readoutNumber(q.upper[i] ?? null)}` },
-        ],
-      })),
-      notes: [],
-    },
-  };
+  return figureOf({
+    title: `Q-Q plot against N(0,1) at n = ${statistics.n}`,
+    description: `Sorted normalized fluctuations ${FLUCTUATION_LABEL} of ${q.size} sampled positions against N(0,1) quantiles, with the pointwise ${levelText} band and the identity line.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    bands: [band],
+    lines: [identity],
+    points: [points],
+    legend,
+    readout: Array.from(q.theoretical, (t, i) => ({
+      n: i,
+      x: round2(x(t)),
+      heading: { id: 'quantile', label: 'N(0,1) quantile', value: readoutNumber(t) },
+      rows: [
+        { id: 'value', label: `Sorted value (rank ${q.rank[i] ?? 0} of ${q.size})`, value: readoutNumber(q.sample[i] ?? null) },
+        { id: 'band', label: `${levelText} band`, value: `${readoutNumber(q.lower[i] ?? null)} to ${readoutNumber(q.upper[i] ?? null)}` },
+      ],
+    })),
+  });
 }
 
 /** SVG path of histogram bars: one closed rectangle per bin with a count above zero. */
@@ -221,31 +216,24 @@ export function fluctuationHistogramFigure(statistics: FluctuationStatistics, si
   const outline: LineMark = { id: 'bars', label: barLabel, style: FLUCTUATION_STYLES.bars, path, vertices: [], data: barRows(hist.edges, hist.counts) };
   const curvePoints: CurvePoint[] = Array.from(hist.curveX, (v, i) => ({ x: v, y: hist.curveY[i] ?? null }));
   const curve: LineMark = { id: 'gaussian', label: 'N(0,1) on the count scale', style: FLUCTUATION_STYLES.gaussianCurve, path: curvePath(curvePoints, x, y), vertices: [], data: curveRows(curvePoints) };
-  return {
-    kind: 'figure',
-    model: {
-      title: `Histogram against N(0,1) at n = ${statistics.n}`,
-      description: `Histogram of ${hist.size} normalized fluctuations ${FLUCTUATION_LABEL} in ${bins} bins, with the N(0,1) density scaled to counts.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [bars],
-      pathLayer: null,
-      lines: [outline, curve],
-      points: [],
-      legend: [legendEntry('bars', barLabel, 'band', FLUCTUATION_STYLES.bars), legendEntry(curve.id, curve.label, 'line', curve.style)],
-      readout: Array.from(hist.counts, (c, k) => ({
-        n: k,
-        x: round2(x(((hist.edges[k] ?? 0) + (hist.edges[k + 1] ?? 0)) / 2)),
-        heading: { id: 'bin', label: 'Bin', value: `${readoutNumber(hist.edges[k] ?? null)} to ${readoutNumber(hist.edges[k + 1] ?? null)}` },
-        rows: [
-          { id: 'count', label: 'Count', value: String(c) },
-          { id: 'expected', label: 'Expected under N(0,1)', value: readoutNumber(hist.expected[k] ?? null) },
-        ],
-      })),
-      notes: [],
-    },
-  };
+  return figureOf({
+    title: `Histogram against N(0,1) at n = ${statistics.n}`,
+    description: `Histogram of ${hist.size} normalized fluctuations ${FLUCTUATION_LABEL} in ${bins} bins, with the N(0,1) density scaled to counts.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    bands: [bars],
+    lines: [outline, curve],
+    legend: [legendEntry('bars', barLabel, 'band', FLUCTUATION_STYLES.bars), legendEntry(curve.id, curve.label, 'line', curve.style)],
+    readout: Array.from(hist.counts, (c, k) => ({
+      n: k,
+      x: round2(x(((hist.edges[k] ?? 0) + (hist.edges[k + 1] ?? 0)) / 2)),
+      heading: { id: 'bin', label: 'Bin', value: `${readoutNumber(hist.edges[k] ?? null)} to ${readoutNumber(hist.edges[k + 1] ?? null)}` },
+      rows: [
+        { id: 'count', label: 'Count', value: String(c) },
+        { id: 'expected', label: 'Expected under N(0,1)', value: readoutNumber(hist.expected[k] ?? null) },
+      ],
+    })),
+  });
 }

@@ -7,6 +7,7 @@ import { logAxis } from './logAxis';
 import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 export const MIXING_STYLES = {
   beta: { colour: 'cobalt', dash: '', width: 1.5, marker: 'circle' },
@@ -80,25 +81,19 @@ export function mixingFigure(diagnostics: DiagnosticsSummary | undefined, size: 
       { id: 'power', label: 'Power-law fit', value: readoutNumber(b.power === null ? null : decayValue(b.power, k)) },
     ],
   }));
-  return {
-    kind: 'figure',
-    model: {
-      title: 'Decay of dependence β(k)',
-      description:
-        `Plug-in estimate of the beta-mixing coefficient between blocks of length ${b.blockLength} separated by gap k, on log axes, ` +
-        'with the fitted exponential and power-law decays and the noise floor. Values are log10 in the CSV.',
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [],
-      pathLayer: null,
-      lines,
-      points,
-      legend,
-      readout,
-      notes: [b.note],
-    },
-  };
+  return figureOf({
+    title: 'Decay of dependence β(k)',
+    description:
+      `Plug-in estimate of the beta-mixing coefficient between blocks of length ${b.blockLength} separated by gap k, on log axes, ` +
+      'with the fitted exponential and power-law decays and the noise floor. Values are log10 in the CSV.',
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    lines,
+    points,
+    legend,
+    readout,
+    notes: [b.note],
+  });
 }

@@ -10,6 +10,7 @@ import { pathColumn } from './pathColumn';
 import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 /** Two-sided 95% normal quantile for the pointwise Greenwood band (common practice, no source). */
 const Z95 = 1.959964;
@@ -110,32 +111,26 @@ export function returnLawFigure(statistics: ReturnLawStatistics, size: FigureSiz
     legendEntry(bandMark.id, bandMark.label, 'band', null, bandMark.colour),
     legendEntry(exp.id, exp.label, 'line', exp.style),
   ];
-  return {
-    kind: 'figure',
-    model: {
-      title: `Return law at n = ${statistics.n}`,
-      description: `Kaplan-Meier survival of t = R_n × block frequency for ${law.size} sampled positions, with its pointwise 95% band, against the Exp(1) survival e^(−s), on a logarithmic scale.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [bandMark],
-      pathLayer: null,
-      lines: [exp, km],
-      points: [],
-      legend,
-      readout: Array.from(law.s, (sv, g) => ({
-        n: g,
-        x: round2(x(sv)),
-        heading: { id: 's', label: 's', value: readoutNumber(sv) },
-        rows: [
-          { id: 'survival', label: 'Kaplan-Meier P(t > s)', value: readoutNumber(law.survival[g] ?? null) },
-          { id: 'se', label: 'Standard error (Greenwood)', value: readoutNumber(law.standardError[g] ?? null) },
-          { id: 'exponential', label: 'e^(−s)', value: readoutNumber(Math.exp(-sv)) },
-        ],
-      })),
-      notes: statistics.notes,
-    },
-  };
+  return figureOf({
+    title: `Return law at n = ${statistics.n}`,
+    description: `Kaplan-Meier survival of t = R_n × block frequency for ${law.size} sampled positions, with its pointwise 95% band, against the Exp(1) survival e^(−s), on a logarithmic scale.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    bands: [bandMark],
+    lines: [exp, km],
+    legend,
+    readout: Array.from(law.s, (sv, g) => ({
+      n: g,
+      x: round2(x(sv)),
+      heading: { id: 's', label: 's', value: readoutNumber(sv) },
+      rows: [
+        { id: 'survival', label: 'Kaplan-Meier P(t > s)', value: readoutNumber(law.survival[g] ?? null) },
+        { id: 'se', label: 'Standard error (Greenwood)', value: readoutNumber(law.standardError[g] ?? null) },
+        { id: 'exponential', label: 'e^(−s)', value: readoutNumber(Math.exp(-sv)) },
+      ],
+    })),
+    notes: statistics.notes,
+  });
 }

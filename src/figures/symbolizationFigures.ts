@@ -8,6 +8,7 @@ import { BAND_OPACITY } from './palette';
 import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry } from './seriesStyle';
+import { figureOf } from './figureOf';
 
 /** Looks of the preview figures: the series and bars in blue, cut points dashed amber. */
 export const SYMBOLIZATION_STYLES = {
@@ -49,25 +50,17 @@ export function symbolizationSeriesFigure(summary: SymbolizationSummary, size: F
   const cutPath = cuts.map((c) => `M${round2(x(d0))},${round2(y(c))}H${round2(x(d1))}`).join('');
   const cutRows: DataRow[] = cuts.map((c) => ({ x: d0, x2: d1, y: c, lower: null, upper: null }));
   const lines = cuts.length === 0 ? [line] : [line, { id: 'cuts', label: cutsLabel(summary), style: SYMBOLIZATION_STYLES.cut, path: cutPath, vertices: [], data: cutRows }];
-  return {
-    kind: 'figure',
-    model: {
-      title: 'Series before symbolization',
-      description: `The ${summary.record.values} values in order (min and max per pixel)${cuts.length > 0 ? `, with the ${cuts.length} cut points as horizontal lines` : ''}.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [],
-      pathLayer: null,
-      lines,
-      points: [],
-      legend: lines.map((l) => legendEntry(l.id, l.label, 'line', l.style)),
-      readout: [],
-      notes: summary.segmentStarts.length > 0 ? [`${summary.segmentStarts.length + 1} segments, cut at missing values`] : [],
-    },
-  };
+  return figureOf({
+    title: 'Series before symbolization',
+    description: `The ${summary.record.values} values in order (min and max per pixel)${cuts.length > 0 ? `, with the ${cuts.length} cut points as horizontal lines` : ''}.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    lines,
+    legend: lines.map((l) => legendEntry(l.id, l.label, 'line', l.style)),
+    notes: summary.segmentStarts.length > 0 ? [`${summary.segmentStarts.length + 1} segments, cut at missing values`] : [],
+  });
 }
 
 /** Histogram of the values (equal-width bins) with the cut points as vertical lines. */
@@ -92,28 +85,21 @@ export function symbolizationHistogramFigure(summary: SymbolizationSummary, size
   };
   const outline: LineMark = { id: 'bars', label: barLabel, style: SYMBOLIZATION_STYLES.bars, path, vertices: [], data: rows };
   const lines = cuts.length === 0 ? [outline] : [outline, cutLine];
-  return {
-    kind: 'figure',
-    model: {
-      title: 'Histogram of the values',
-      description: `Histogram of ${summary.record.values} values in ${counts.length} equal-width bins${cuts.length > 0 ? `, with the ${cuts.length} cut points as vertical lines` : ''}.`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans: [],
-      bands: [bars],
-      pathLayer: null,
-      lines,
-      points: [],
-      legend: [legendEntry('bars', barLabel, 'band', SYMBOLIZATION_STYLES.bars), ...(cuts.length === 0 ? [] : [legendEntry('cuts', cutLine.label, 'line', cutLine.style)])],
-      readout: Array.from(counts, (c, k) => ({
-        n: k,
-        x: round2(x(((edges[k] ?? 0) + (edges[k + 1] ?? 0)) / 2)),
-        heading: { id: 'bin', label: 'Bin', value: `${readoutNumber(edges[k] ?? null)} to ${readoutNumber(edges[k + 1] ?? null)}` },
-        rows: [{ id: 'count', label: 'Count', value: String(c) }],
-      })),
-      notes: [],
-    },
-  };
+  return figureOf({
+    title: 'Histogram of the values',
+    description: `Histogram of ${summary.record.values} values in ${counts.length} equal-width bins${cuts.length > 0 ? `, with the ${cuts.length} cut points as vertical lines` : ''}.`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    bands: [bars],
+    lines,
+    legend: [legendEntry('bars', barLabel, 'band', SYMBOLIZATION_STYLES.bars), ...(cuts.length === 0 ? [] : [legendEntry('cuts', cutLine.label, 'line', cutLine.style)])],
+    readout: Array.from(counts, (c, k) => ({
+      n: k,
+      x: round2(x(((edges[k] ?? 0) + (edges[k + 1] ?? 0)) / 2)),
+      heading: { id: 'bin', label: 'Bin', value: `${readoutNumber(edges[k] ?? null)} to ${readoutNumber(edges[k + 1] ?? null)}` },
+      rows: [{ id: 'count', label: 'Count', value: String(c) }],
+    })),
+  });
 }

@@ -7,6 +7,7 @@ import { plotArea } from './plotArea';
 import { readoutNumber } from './readoutFormat';
 import { legendEntry, STYLES } from './seriesStyle';
 import { trustedSpan } from './trustedSpan';
+import { figureOf } from './figureOf';
 
 /** Where a straight line of a given slope is anchored: it passes through (meanN, meanVariance). */
 export interface FittedLine {
@@ -130,23 +131,18 @@ export function varianceGrowthFigure(result: AnalysisResult, size: FigureSize): 
       { id: 'fit', label: 'Fitted line', value: fit === null ? '—' : readoutNumber(fit.intercept + fit.slope * r.n) },
     ],
   }));
-  return {
-    kind: 'figure',
-    model: {
-      title: 'Growth of Var(log R_n)',
-      description: `Variance of log R_n against block length n in ${sq}, with the fitted line whose slope estimates σ².`,
-      size,
-      plot,
-      x: xAxis,
-      y: yAxis,
-      spans,
-      bands: [],
-      pathLayer: null,
-      lines,
-      points,
-      legend,
-      readout,
-      notes,
-    },
-  };
+  return figureOf({
+    title: 'Growth of Var(log R_n)',
+    description: `Variance of log R_n against block length n in ${sq}, with the fitted line whose slope estimates σ².`,
+    size,
+    plot,
+    x: xAxis,
+    y: yAxis,
+    spans,
+    lines,
+    points,
+    legend,
+    readout,
+    notes,
+  });
 }

@@ -1,25 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import { ORDER_ONE_FACTS } from '../helpers/calibrationFacts';
 import { calibrationResult } from '../../src/core/calibration/calibrationResult';
-import type { CalibrationModelFacts } from '../../src/core/calibration/calibrationResult';
 import type { ReplicateRecord } from '../../src/core/calibration/surrogateStudy';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import { calibrationFigure } from '../../src/figures/calibrationFigure';
 
-const facts: CalibrationModelFacts = {
-  order: 1,
-  maxOrder: 3,
-  capReason: 'test',
-  criterion: 'BIC',
-  observations: 100,
-  scores: [],
-  states: 2,
-  transientStates: 0,
-  droppedTransitions: 0,
-  period: 1,
-  entropyRate: 1,
-  sigma2: 0.5,
-  rule: '',
-};
+const facts = ORDER_ONE_FACTS;
 
 function record(replicate: number, entropy: number, lo: number, hi: number): ReplicateRecord {
   return { replicate, seed: replicate, entropy, entropyInterval: [lo, hi], entropyMethod: 'return-slope', sigma2: null, sigma2Interval: null };

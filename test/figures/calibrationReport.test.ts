@@ -1,5 +1,5 @@
-import { DOMParser } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
+import { parseHtml, byId, hasId } from '../helpers/markupDocument';
 import { exportFigures } from '../../src/figures/exportFigures';
 import { reportHtml } from '../../src/figures/reportHtml';
 import { extrasFixture, HOSTILE_NAME } from '../helpers/sessionExtrasFixtures';
@@ -7,26 +7,9 @@ import { extrasFixture, HOSTILE_NAME } from '../helpers/sessionExtrasFixtures';
 const DATE = '2026-12-01T23:59:00Z';
 const { result, calibration } = extrasFixture();
 
-function parse(html: string): Document {
-  const errors: string[] = [];
-  const doc = new DOMParser({ onError: (level, message) => errors.push(`${level}: ${message}`) }).parseFromString(html, 'text/html');
-  expect(errors.filter((e) => !e.startsWith('warning'))).toEqual([]);
-  return doc as unknown as Document;
-}
-
-function byId(doc: Document, id: string): Element {
-  const e = Array.from(doc.getElementsByTagName('*')).find((x) => x.getAttribute('id') === id);
-  if (e === undefined) throw new Error(`no element #${id}`);
-  return e;
-}
-
-function hasId(doc: Document, id: string): boolean {
-  return Array.from(doc.getElementsByTagName('*')).some((x) => x.getAttribute('id') === id);
-}
-
 describe('report with a calibration', () => {
   const html = reportHtml(result, { date: DATE, calibration });
-  const doc = parse(html);
+  const doc = parseHtml(html);
 
   it('adds the calibration section with its figure: seven inline figures, ids unique, no script', () => {
     expect(html).not.toMatch(/<script/i);
@@ -89,10 +72,10 @@ describe('report with a calibration', () => {
   });
 
   it('marks a partial calibration and one that belongs to another analysis', () => {
-    const partial = parse(reportHtml(result, { calibration: { ...calibration, partial: true, replicatesRequested: 40 } }));
+    const partial = parseHtml(reportHtml(result, { calibration: { ...calibration, partial: true, replicatesRequested: 40 } }));
     expect(byId(partial, 'calibration-partial').textContent).toBe('Partial: 10 of 40 replicates finished before the calibration was stopped.');
     const other = { ...calibration, input: { ...calibration.input, name: '<other>.txt' } };
-    const stale = parse(reportHtml(result, { calibration: other }));
+    const stale = parseHtml(reportHtml(result, { calibration: other }));
     expect(byId(stale, 'calibration-stale').textContent).toContain('belongs to another analysis (input “<other>.txt”');
     expect(byId(stale, 'calibration-corrected').textContent).toContain('(stale)');
   });

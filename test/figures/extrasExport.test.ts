@@ -1,5 +1,5 @@
-import { DOMParser } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
+import { parseSvg, marks } from '../helpers/markupDocument';
 import { normalQuantilePlot } from '../../src/core/estimate/normalQuantilePlot';
 import { calibrationCaption, exportCalibrationFigure } from '../../src/figures/exportCalibrationFigure';
 import { comparisonCaption, exportComparisonFigures } from '../../src/figures/exportComparisonFigures';
@@ -11,17 +11,6 @@ import { exportFileName } from '../../src/export/exportFileName';
 import { extrasFixture, HOSTILE_NAME, HOSTILE_NAME_B } from '../helpers/sessionExtrasFixtures';
 
 const { result, calibration, comparison } = extrasFixture();
-
-function parse(svg: string): Document {
-  const errors: string[] = [];
-  const doc = new DOMParser({ onError: (level, message) => errors.push(`${level}: ${message}`) }).parseFromString(svg, 'image/svg+xml');
-  expect(errors).toEqual([]);
-  return doc as unknown as Document;
-}
-
-function marks(doc: Document, kind: string): Element[] {
-  return Array.from(doc.getElementsByTagName('*')).filter((e) => e.getAttribute('data-mark') === kind);
-}
 
 function modelOf(figure: Figure): FigureModel {
   if (figure.kind !== 'figure') throw new Error(figure.message);
@@ -65,7 +54,7 @@ describe('calibration figure export', () => {
   it(`${id}: the SVG parses, holds no script, and its marks are the model's; one point per surrogate estimate`, () => {
     const svg = figureSvg(model, caption);
     expect(svg).not.toMatch(/<script/i);
-    const doc = parse(svg);
+    const doc = parseSvg(svg);
     expect(doc.getElementsByTagName('script').length).toBe(0);
     expectMarksOfModel(doc, model);
     const estimates = calibration.records.filter((r) => r.entropy !== null).length;
@@ -120,7 +109,7 @@ describe('comparison figure export', () => {
       const model = modelOf(figure);
       const svg = figureSvg(model, caption);
       expect(svg).not.toMatch(/<script|<b>/i);
-      const doc = parse(svg);
+      const doc = parseSvg(svg);
       expectMarksOfModel(doc, model);
       const rows = dataRows(figureCsv(id, model, caption));
       expect(rows).toHaveLength(figureCsvRowCount(model));

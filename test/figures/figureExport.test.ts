@@ -1,5 +1,5 @@
-import { DOMParser } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
+import { parseSvg, marks } from '../helpers/markupDocument';
 import { analyzeSequence } from '../../src/core/analyze';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import { markovSource } from '../../src/core/sources/markovSource';
@@ -19,17 +19,6 @@ const source = markovSource([
 ]);
 const result = analyzeSequence(source.generate(20_000, 5), { name: HOSTILE, sha256: 'ab'.repeat(32), format: 'chars' }, { ...DEFAULT_SETTINGS, maxN: 16 });
 const figures = exportFigures(result);
-
-function parse(svg: string): Document {
-  const errors: string[] = [];
-  const doc = new DOMParser({ onError: (level, message) => errors.push(`${level}: ${message}`) }).parseFromString(svg, 'image/svg+xml');
-  expect(errors).toEqual([]);
-  return doc as unknown as Document;
-}
-
-function marks(doc: Document, kind: string): Element[] {
-  return Array.from(doc.getElementsByTagName('*')).filter((e) => e.getAttribute('data-mark') === kind);
-}
 
 /** Marks a model asks for: drawn paths of sample paths, lines, markers and points. */
 function expected(model: FigureModel): { paths: number; lines: number; markers: number; points: number; bands: number } {
@@ -65,7 +54,7 @@ describe('figureSvg', () => {
     it(`${id}: parses as XML, is standalone and holds as many marks as the model`, () => {
       if (figure.kind !== 'figure') throw new Error(figure.message);
       const svg = figureSvg(figure.model, caption);
-      const doc = parse(svg);
+      const doc = parseSvg(svg);
       const root = doc.documentElement;
       expect(root.namespaceURI).toBe('http://www.w3.org/2000/svg');
       expect(root.getAttribute('viewBox')).toBe(`0 0 ${root.getAttribute('width')} ${root.getAttribute('height')}`);
@@ -87,7 +76,7 @@ describe('figureSvg', () => {
     if (figure.kind !== 'figure') throw new Error('no figure');
     const svg = figureSvg(figure.model, caption);
     expect(svg).not.toContain('<script>');
-    const doc = parse(svg);
+    const doc = parseSvg(svg);
     expect(doc.getElementsByTagName('script').length).toBe(0);
     const texts = Array.from(doc.getElementsByTagName('text')).map((t) => t.textContent);
     expect(texts).toContain(`Input: ${HOSTILE}`);

@@ -1,5 +1,5 @@
-import { DOMParser } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
+import { parseHtml, byId } from '../helpers/markupDocument';
 import { analyzeSequence } from '../../src/core/analyze';
 import type { AnalysisResult } from '../../src/core/result/analysisResult';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
@@ -21,22 +21,9 @@ function analyse(name: string): AnalysisResult {
 }
 const result = analyse('wind.txt');
 
-function parse(html: string): Document {
-  const errors: string[] = [];
-  const doc = new DOMParser({ onError: (level, message) => errors.push(`${level}: ${message}`) }).parseFromString(html, 'text/html');
-  expect(errors.filter((e) => !e.startsWith('warning'))).toEqual([]);
-  return doc as unknown as Document;
-}
-
-function byId(doc: Document, id: string): Element {
-  const e = Array.from(doc.getElementsByTagName('*')).find((x) => x.getAttribute('id') === id);
-  if (e === undefined) throw new Error(`no element #${id}`);
-  return e;
-}
-
 describe('reportHtml', () => {
   const html = reportHtml(result, { date: DATE });
-  const doc = parse(html);
+  const doc = parseHtml(html);
 
   it('is one HTML5 document with a charset, a title and no external resource', () => {
     expect(html.startsWith('<!DOCTYPE html>\n<html lang="en">')).toBe(true);
@@ -83,7 +70,7 @@ describe('reportHtml', () => {
 
   it('shows the exact reference values when the input came from a reference source', () => {
     const withReference: AnalysisResult = { ...result, reference: { source: 'markov', entropyRate: 0.5, sigma2: 0.25 } };
-    const text = byId(parse(reportHtml(withReference)), 'reference').textContent ?? '';
+    const text = byId(parseHtml(reportHtml(withReference)), 'reference').textContent ?? '';
     expect(text).toContain('h = 0.500000');
     expect(text).toContain('σ² = 0.250000');
     expect(html).not.toContain('id="reference"');
@@ -99,7 +86,7 @@ describe('reportHtml', () => {
 
   it('prints a hostile input name as text, never as markup', () => {
     const hostile = reportHtml(analyse(HOSTILE), { date: DATE });
-    const d = parse(hostile);
+    const d = parseHtml(hostile);
     expect(d.getElementsByTagName('script').length).toBe(0);
     expect(d.getElementsByTagName('img').length).toBe(0);
     expect(hostile).not.toMatch(/<script/i);
@@ -113,7 +100,7 @@ describe('reportHtml', () => {
     expect(looksPhysiological({ name: 'wind.txt', format: 'chars' })).toBe(false);
     const eeg = reportHtml(analyse('eeg-channel-3.txt'));
     expect(eeg).toContain('not a clinical measurement');
-    expect(byId(parse(eeg), 'physiological-note').textContent).toContain('research estimate');
+    expect(byId(parseHtml(eeg), 'physiological-note').textContent).toContain('research estimate');
     expect(html).not.toContain('clinical measurement');
   });
 
@@ -124,7 +111,7 @@ describe('reportHtml', () => {
     expect(looksPhysiological({ name: 'session-4.csv', format: 'csv' }, ['wind_sector', 'time'])).toBe(false);
     const plain = analyse('session-4.csv');
     expect(reportHtml(plain)).not.toContain('clinical measurement');
-    expect(byId(parse(reportHtml(plain, { columns: ['EEG Cz'] })), 'physiological-note').textContent).toContain('research estimate, not a clinical measurement');
+    expect(byId(parseHtml(reportHtml(plain, { columns: ['EEG Cz'] })), 'physiological-note').textContent).toContain('research estimate, not a clinical measurement');
   });
 
   it('gives the same bytes for the same result and date, and prints the date', () => {
@@ -138,7 +125,7 @@ describe('reportHtml with a symbolized input', () => {
   it('lists the symbolization among the settings and cites its method', () => {
     const symbolization = { spec: 'ordinal:3:1', cutPoints: [], cells: [{ label: '012', count: 5 }], values: 7, missing: 2, missingPolicy: 'skip' as const, segments: 1, segmentsDropped: 0 };
     const html = reportHtml({ ...result, input: { ...result.input, symbolization } }, { date: DATE });
-    const doc = parse(html);
+    const doc = parseHtml(html);
     expect(byId(doc, 'settings').textContent).toContain('Symbolizationordinal:3:1; 2 missing values skipped');
     expect(byId(doc, 'methods').textContent).toContain('Bandt & Pompe, Phys. Rev. Lett. 88 (2002) 174102');
     expect(reportHtml(result, { date: DATE })).not.toContain('Symbolization');

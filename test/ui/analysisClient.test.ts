@@ -1,5 +1,5 @@
-import { expose } from 'comlink';
 import { describe, expect, it } from 'vitest';
+import { fakeWorkers } from '../helpers/fakeWorkers';
 import type { AnalysisResult, LengthRow } from '../../src/core/result/analysisResult';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import type { AnalysisProgress, AnalysisReport } from '../../src/ui/analysisClient';
@@ -7,34 +7,12 @@ import { WorkerStopped, createAnalysisClient, workerStoppedMessage } from '../..
 import type { WorkerLike } from '../../src/ui/analysisClient';
 import { fakeResult, lengthRow } from './fixtures';
 
-/**
- * A stand-in worker on a MessageChannel: the test exposes an api on one port and the client talks to
- * the other, as it would to a real worker.
- */
-function fakeWorkers(api: Record<string, unknown>) {
-  const started: { terminated: boolean }[] = [];
-  const start = (): WorkerLike => {
-    const { port1, port2 } = new MessageChannel();
-    expose(api, port2);
-    const record = { terminated: false };
-    started.push(record);
-    return Object.assign(port1, {
-      terminate: () => {
-        record.terminated = true;
-        port1.close();
-        port2.close();
-      },
-    }) as unknown as WorkerLike;
-  };
-  return { start, started };
-}
-
 const never = (): Promise<never> => new Promise(() => {});
 
 describe('analysis client', () => {
   it('starts no worker until the first call, and reuses it afterwards', async () => {
     const result = fakeResult();
-    const { start, started } = fakeWorkers({ analyzeDemo: () => result });
+    const { start, started } = fakeWorkers<WorkerLike>({ analyzeDemo: () => result });
     const client = createAnalysisClient(start);
     expect(started).toHaveLength(0);
     const signal = new AbortController().signal;
@@ -49,7 +27,7 @@ describe('analysis client', () => {
       analyzeDemo: (_id: string, _n: number, _seed: number, _s: unknown, onProgress: (p: AnalysisProgress) => Promise<void>) =>
         onProgress({ kind: 'level', n: 2, active: 17 }).then(() => fakeResult()),
     };
-    const { start } = fakeWorkers(api);
+    const { start } = fakeWorkers<WorkerLike>(api);
     const client = createAnalysisClient(start);
     const seen: AnalysisProgress[] = [];
     await client.analyzeDemo('d', 10, 1, DEFAULT_SETTINGS, { signal: new AbortController().signal, onProgress: (p) => seen.push(p) });
@@ -65,7 +43,7 @@ describe('analysis client', () => {
           .then(() => onReport({ kind: 'rows', rows: [row] }))
           .then(() => fakeResult()),
     };
-    const { start } = fakeWorkers(api);
+    const { start } = fakeWorkers<WorkerLike>(api);
     const client = createAnalysisClient(start);
     const progress: AnalysisProgress[] = [];
     const rows: (readonly LengthRow[])[] = [];
@@ -80,7 +58,7 @@ describe('analysis client', () => {
   });
 
   it('rejects with the core message intact', async () => {
-    const { start } = fakeWorkers({
+    const { start } = fakeWorkers<WorkerLike>({
       analyzeDemo: () => {
         throw new RangeError('maxN must be an integer from 1 to N - 1 = 9; got 40');
       },
@@ -93,7 +71,7 @@ describe('analysis client', () => {
 
   it('abort terminates the worker, rejects with an AbortError, and the next call starts a new worker', async () => {
     const result = fakeResult();
-    const { start, started } = fakeWorkers({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
+    const { start, started } = fakeWorkers<WorkerLike>({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
     const client = createAnalysisClient(start);
     const controller = new AbortController();
     const pending = client.analyzeDemo('hang', 10, 1, DEFAULT_SETTINGS, { signal: controller.signal });
@@ -106,7 +84,7 @@ describe('analysis client', () => {
   });
 
   it('a call with an already aborted signal rejects without starting a worker', async () => {
-    const { start, started } = fakeWorkers({});
+    const { start, started } = fakeWorkers<WorkerLike>({});
     const client = createAnalysisClient(start);
     const controller = new AbortController();
     controller.abort();
@@ -116,7 +94,7 @@ describe('analysis client', () => {
 
   it('a worker that dies during a call rejects it as WorkerStopped in plain words, and the next call starts a new worker', async () => {
     const result = fakeResult();
-    const { start, started } = fakeWorkers({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
+    const { start, started } = fakeWorkers<WorkerLike>({ analyzeDemo: (id: string): Promise<AnalysisResult> => (id === 'hang' ? never() : Promise.resolve(result)) });
     const workers: EventTarget[] = [];
     const client = createAnalysisClient(() => {
       const w = start();
@@ -137,7 +115,7 @@ describe('analysis client', () => {
   });
 
   it('a worker error without a message still names what happened', async () => {
-    const { start } = fakeWorkers({ analyzeDemo: never });
+    const { start } = fakeWorkers<WorkerLike>({ analyzeDemo: never });
     const workers: EventTarget[] = [];
     const client = createAnalysisClient(() => {
       const w = start();

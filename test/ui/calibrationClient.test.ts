@@ -1,28 +1,9 @@
-import { expose } from 'comlink';
 import { describe, expect, it } from 'vitest';
+import { fakeWorkers } from '../helpers/fakeWorkers';
 import type { CalibrationModelFacts, ReplicateRecord } from '../../src/core';
 import { DEFAULT_SETTINGS } from '../../src/core';
 import { calibrationPoolSize, createCalibrationClient, MAX_CALIBRATION_WORKERS } from '../../src/ui/calibrationClient';
 import type { CalibrationWorkerLike } from '../../src/ui/calibrationClient';
-
-/** Stand-in workers on MessageChannels, as in analysisClient.test.ts. */
-function fakeWorkers(api: Record<string, unknown>) {
-  const started: { terminated: boolean }[] = [];
-  const start = (): CalibrationWorkerLike => {
-    const { port1, port2 } = new MessageChannel();
-    expose(api, port2);
-    const record = { terminated: false };
-    started.push(record);
-    return Object.assign(port1, {
-      terminate: () => {
-        record.terminated = true;
-        port1.close();
-        port2.close();
-      },
-    }) as unknown as CalibrationWorkerLike;
-  };
-  return { start, started };
-}
 
 const facts = { order: 1 } as CalibrationModelFacts;
 const fitted = { facts, model: {}, alphabet: ['0', '1'], length: 100 };
@@ -43,7 +24,7 @@ describe('calibrationPoolSize', () => {
 describe('calibration client', () => {
   it('fits once, runs every replicate exactly once on the pool, and terminates the workers at the end', async () => {
     let fits = 0;
-    const { start, started } = fakeWorkers({ fit: () => (fits++, fitted), replicate: (_f: unknown, _s: unknown, _b: number, i: number) => record(i) });
+    const { start, started } = fakeWorkers<CalibrationWorkerLike>({ fit: () => (fits++, fitted), replicate: (_f: unknown, _s: unknown, _b: number, i: number) => record(i) });
     const seen: number[] = [];
     let gotFacts: CalibrationModelFacts | null = null;
     await createCalibrationClient(start, 3).calibrate(demo, DEFAULT_SETTINGS, 10, 1, {
@@ -61,7 +42,7 @@ describe('calibration client', () => {
   it('abort terminates every worker and rejects; records already delivered stay delivered', async () => {
     const controller = new AbortController();
     const seen: number[] = [];
-    const { start, started } = fakeWorkers({
+    const { start, started } = fakeWorkers<CalibrationWorkerLike>({
       fit: () => fitted,
       // Replicate 0 answers, the others never do (a tight loop that only termination stops).
       replicate: (_f: unknown, _s: unknown, _b: number, i: number) => (i === 0 ? record(0) : new Promise(() => {})),
@@ -79,7 +60,7 @@ describe('calibration client', () => {
   });
 
   it('a failure in a worker rejects with its message', async () => {
-    const { start, started } = fakeWorkers({
+    const { start, started } = fakeWorkers<CalibrationWorkerLike>({
       fit: () => {
         throw new RangeError('a Markov chain can be fitted to at most 1024 distinct symbols; got 5000');
       },

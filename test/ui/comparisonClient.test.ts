@@ -1,33 +1,14 @@
-import { expose } from 'comlink';
 import { describe, expect, it } from 'vitest';
+import { fakeWorkers } from '../helpers/fakeWorkers';
 import { DEFAULT_SETTINGS } from '../../src/core/result/analysisResult';
 import type { ComparisonProgress, ComparisonWorkerLike } from '../../src/ui/comparisonClient';
 import { createComparisonClient } from '../../src/ui/comparisonClient';
-
-/** A stand-in worker on a MessageChannel, as in analysisClient.test.ts. */
-function fakeWorkers(api: Record<string, unknown>) {
-  const started: { terminated: boolean }[] = [];
-  const start = (): ComparisonWorkerLike => {
-    const { port1, port2 } = new MessageChannel();
-    expose(api, port2);
-    const record = { terminated: false };
-    started.push(record);
-    return Object.assign(port1, {
-      terminate: () => {
-        record.terminated = true;
-        port1.close();
-        port2.close();
-      },
-    }) as unknown as ComparisonWorkerLike;
-  };
-  return { start, started };
-}
 
 const side = { kind: 'source', spec: 'coin', length: 10, seed: 1 } as const;
 
 describe('comparison client', () => {
   it('delivers progress and the result, and keeps the core message of a failure', async () => {
-    const { start } = fakeWorkers({
+    const { start } = fakeWorkers<ComparisonWorkerLike>({
       compare: (_a: unknown, _b: unknown, _s: unknown, onProgress: (p: ComparisonProgress) => Promise<void>) =>
         onProgress({ stage: 'waiting', done: 1, total: 2 }).then(() => ({ schema: 'returnrate.comparison/1' })),
     });
@@ -38,13 +19,13 @@ describe('comparison client', () => {
     expect(seen).toEqual([{ stage: 'waiting', done: 1, total: 2 }]);
     client.dispose();
 
-    const failing = createComparisonClient(fakeWorkers({ compare: () => Promise.reject(new RangeError('maxN must be an integer')) }).start);
+    const failing = createComparisonClient(fakeWorkers<ComparisonWorkerLike>({ compare: () => Promise.reject(new RangeError('maxN must be an integer')) }).start);
     await expect(failing.compare(side, side, DEFAULT_SETTINGS, new AbortController().signal, () => {})).rejects.toThrow('maxN must be an integer');
     failing.dispose();
   });
 
   it('terminates the worker on abort and rejects the call; the next call starts a fresh worker', async () => {
-    const { start, started } = fakeWorkers({ compare: () => new Promise(() => {}) });
+    const { start, started } = fakeWorkers<ComparisonWorkerLike>({ compare: () => new Promise(() => {}) });
     const client = createComparisonClient(start);
     const controller = new AbortController();
     const pending = client.compare(side, side, DEFAULT_SETTINGS, controller.signal, () => {});

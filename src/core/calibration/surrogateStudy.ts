@@ -1,5 +1,6 @@
 import { analyzeSequence } from '../analyze';
 import type { AnalysisSettings } from '../result/analysisResult';
+import { fmix32 } from '../sources/fmix32';
 import { sequenceFromSymbols } from '../sources/sequenceFromSymbols';
 import type { FittedMarkovModel } from './fittedMarkovModel';
 import { generateFromModel } from './fittedMarkovModel';
@@ -22,20 +23,6 @@ export interface ReplicateRecord {
 export const MAX_REPLICATES = 1 << 20;
 
 /**
- * MurmurHash3's 32-bit finalizer (Appleby, from memory), spreading the base seed so that base seeds
- * 1, 2, 3 give unrelated seed families.
- */
-function mix32(x: number): number {
-  let h = x | 0;
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x85ebca6b);
-  h ^= h >>> 13;
-  h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h >>> 0;
-}
-
-/**
  * The seed of replicate i under a base seed: a 32-bit hash of the base seed times 2^20 plus i, so
  * the replicates of one base seed are distinct, and seededRandom hashes each into its own stream.
  * @throws RangeError for a base seed that is not a safe integer or an index outside [0, MAX_REPLICATES)
@@ -47,7 +34,8 @@ export function replicateSeed(baseSeed: number, index: number): number {
   }
   const lo = baseSeed >>> 0;
   const hi = Math.floor(baseSeed / 4294967296) | 0;
-  return mix32(lo ^ mix32(hi ^ 0x2545f491)) * MAX_REPLICATES + index;
+  // fmix32 spreads the base seed so that base seeds 1, 2, 3 give unrelated seed families; unsigned here.
+  return (fmix32(lo ^ fmix32(hi ^ 0x2545f491)) >>> 0) * MAX_REPLICATES + index;
 }
 
 function finiteOrNull(x: number): number | null {

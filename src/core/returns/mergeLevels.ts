@@ -1,4 +1,5 @@
 import type { LevelStats, SampledPaths } from './levelStats';
+import { addReturnSums } from './addReturnSums';
 
 /**
  * The per-n sufficient statistics of the analysis are sums over positions (counts, sums and sums of
@@ -20,15 +21,7 @@ export function mergeLevelStats(a: LevelStats, b: LevelStats): LevelStats {
     positions: a.positions + b.positions,
     distinctBlocks: a.distinctBlocks + b.distinctBlocks,
     singletons: a.singletons + b.singletons,
-    sumCountLogCount: a.sumCountLogCount + b.sumCountLogCount,
-    forwardObserved: a.forwardObserved + b.forwardObserved,
-    forwardSumLog: a.forwardSumLog + b.forwardSumLog,
-    forwardSumLog2: a.forwardSumLog2 + b.forwardSumLog2,
-    observed: a.observed + b.observed,
-    sumLog: a.sumLog + b.sumLog,
-    sumLog2: a.sumLog2 + b.sumLog2,
-    sumLogRc: a.sumLogRc + b.sumLogRc,
-    sumLogRc2: a.sumLogRc2 + b.sumLogRc2,
+    ...addReturnSums(a, b),
     histogram: addArrays(a.histogram, b.histogram),
     matchCount: a.matchCount + b.matchCount,
     batchObserved: addArrays(a.batchObserved, b.batchObserved),

@@ -1,4 +1,5 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
+import { addReturnSums } from './addReturnSums';
 import { collectReturns, type LevelSums, type ReturnGeometry } from './collectReturns';
 import type { LevelStats, ReturnScan } from './levelStats';
 import { partitionBinaryLevel } from './partitionBinaryLevel';
@@ -64,14 +65,7 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
   let next: Int32Array = new Int32Array(order.length);
   let words: Uint16Array = task.words;
   let nextWords: Uint16Array = new Uint16Array(packed ? order.length : 0);
-  const buffers: RefinementBuffers = {
-    symbols,
-    packed,
-    symbolMask: (1 << bits) - 1,
-    counts: new Int32Array(alphabetSize),
-    touched: new Int32Array(Math.min(alphabetSize, N) + 1),
-    scratch: allocateSymbols(packed ? 0 : order.length, alphabetSize),
-  };
+  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, order.length);
   const sums: LevelSums[] = [];
   const active: number[] = [];
   let activeLength = order.length;
@@ -92,6 +86,21 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
     active.push(activeLength);
   }
   return { sums, active, paths, pathCounts };
+}
+
+/**
+ * The refinement's working buffers for `length` positions of `symbols`, `bits` bits a symbol; the
+ * scratch copy of the symbols is needed only when they are not packed into words.
+ */
+function refinementBuffers(symbols: SymbolArray, alphabetSize: number, bits: number, packed: boolean, length: number): RefinementBuffers {
+  return {
+    symbols,
+    packed,
+    symbolMask: (1 << bits) - 1,
+    counts: new Int32Array(alphabetSize),
+    touched: new Int32Array(Math.min(alphabetSize, symbols.length) + 1),
+    scratch: allocateSymbols(packed ? 0 : length, alphabetSize),
+  };
 }
 
 /**
@@ -198,14 +207,7 @@ export async function scanReturnsSplit(
   let nextWords = new Uint16Array(packed ? N : 0);
   for (let i = 0; i < N; i++) order[i] = i;
   if (N > 0) order[0] = ~0;
-  const buffers: RefinementBuffers = {
-    symbols,
-    packed,
-    symbolMask: (1 << bits) - 1,
-    counts: new Int32Array(alphabetSize),
-    touched: new Int32Array(Math.min(alphabetSize, N) + 1),
-    scratch: allocateSymbols(packed ? 0 : N, alphabetSize),
-  };
+  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, N);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
   const levels: LevelStats[] = [];
@@ -297,15 +299,7 @@ export function addSums(a: LevelSums, b: LevelSums): LevelSums {
   for (let i = 0; i < histogram.length; i++) histogram[i] += b.histogram[i];
   return {
     classes: a.classes + b.classes,
-    sumCountLogCount: a.sumCountLogCount + b.sumCountLogCount,
-    forwardObserved: a.forwardObserved + b.forwardObserved,
-    forwardSumLog: a.forwardSumLog + b.forwardSumLog,
-    forwardSumLog2: a.forwardSumLog2 + b.forwardSumLog2,
-    observed: a.observed + b.observed,
-    sumLog: a.sumLog + b.sumLog,
-    sumLog2: a.sumLog2 + b.sumLog2,
-    sumLogRc: a.sumLogRc + b.sumLogRc,
-    sumLogRc2: a.sumLogRc2 + b.sumLogRc2,
+    ...addReturnSums(a, b),
     matchCount: a.matchCount + b.matchCount,
     batches,
     histogram,

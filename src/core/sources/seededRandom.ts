@@ -1,23 +1,10 @@
 import { xoroshiro128plusFromState } from 'pure-rand/generator/xoroshiro128plus';
 import type { RandomGenerator } from 'pure-rand/types/RandomGenerator';
+import { fmix32 } from './fmix32';
 
 const TWO_POW_32 = 4294967296;
 const TWO_POW_26 = 67108864;
 const TWO_POW_MINUS_53 = 1 / 9007199254740992;
-
-/**
- * MurmurHash3's 32-bit finalizer (Appleby, from memory): a bijection with full avalanche, used to
- * spread a small seed over the generator state.
- */
-function fmix32(x: number): number {
-  let h = x | 0;
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x85ebca6b);
-  h ^= h >>> 13;
-  h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h | 0;
-}
 
 /**
  * A xoroshiro128+ generator (pure-rand) for a seed. pure-rand's own xoroshiro128plus(seed) puts the

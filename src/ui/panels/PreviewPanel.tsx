@@ -4,6 +4,7 @@ import { useAppState } from '../store/store';
 import { previewView } from '../view/previewView';
 import type { PreviewView } from '../view/previewView';
 import { SymbolizationPreview } from './SymbolizationPreview';
+import { SymbolCountTable } from './SymbolCountTable';
 import { cautionColumns, physiologicalCaution } from '../view/cautionView';
 
 function Ready({ view, symbolization }: { readonly view: Extract<PreviewView, { kind: 'ready' }>; readonly symbolization: SymbolizationSummary | undefined }) {
@@ -30,33 +31,7 @@ function Ready({ view, symbolization }: { readonly view: Extract<PreviewView, { 
         <div className="preview-alphabet">
           <p data-testid="preview-symbols">{view.symbolsLine}</p>
           {view.alphabet.length > 0 && (
-            <div className="table-scroll small" tabIndex={0} role="region" aria-label="Alphabet of the preview, scrollable">
-              <table className="compact">
-                <caption>{view.alphabetCaption}</caption>
-                <thead>
-                  <tr>
-                    <th scope="col">Symbol</th>
-                    <th scope="col" className="num">
-                      Count
-                    </th>
-                    <th scope="col" className="num">
-                      Share
-                    </th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {view.alphabet.map((row) => (
-                    <tr key={row.symbol}>
-                      <th scope="row" className="symbol">
-                        <span aria-label={row.spoken}>{row.symbol}</span>
-                      </th>
-                      <td className="num">{row.count}</td>
-                      <td className="num">{row.share}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            </div>
+            <SymbolCountTable rows={view.alphabet} caption={view.alphabetCaption} regionLabel="Alphabet of the preview, scrollable" />
           )}
         </div>
       </div>

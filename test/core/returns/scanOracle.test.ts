@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { scanReturns } from '../../../src/core/returns/scanReturns';
 import { bruteScan } from '../../helpers/bruteScan';
+import { expectScansAgree } from '../../helpers/expectScansAgree';
 
 // Property test of the whole engine against the O(N^2) oracle on every LevelStats field. The
 // oracle check in test/helpers/bruteScan.test.ts uses three fixed random sequences of 2 to 4
@@ -42,23 +43,7 @@ describe('scanReturns against the brute-force oracle (property)', () => {
         const fast = scanReturns(x, c.a, { maxN, batchTarget, sampleTarget });
         const stride = fast.paths.positions.length > 1 ? fast.paths.positions[1]! : N;
         const slow = bruteScan(x, c.a, { maxN, batchLength: fast.batchLength, sampleStride: stride, matchWindow: fast.matchWindow });
-        expect(fast.exhausted).toBe(slow.exhausted);
-        expect(fast.matchPositions).toBe(slow.matchPositions);
-        expect(Array.from(fast.paths.forward)).toEqual(Array.from(slow.paths.forward));
-        expect(Array.from(fast.paths.counts)).toEqual(Array.from(slow.paths.counts));
-        for (let n = 1; n <= maxN; n++) {
-          const s = slow.levels[n - 1]!;
-          const f = fast.levels[n - 1]!;
-          for (const key of ['positions', 'distinctBlocks', 'singletons', 'forwardObserved', 'observed', 'matchCount'] as const) {
-            expect(f[key], `${key} at n = ${n}`).toBe(s[key]);
-          }
-          // logOfPositive is accurate to 5e-12 per value (src/core/returns/logOfPositive.ts); sums of a few hundred stay far inside 1e-6
-          for (const key of ['sumCountLogCount', 'forwardSumLog', 'forwardSumLog2', 'sumLog', 'sumLog2', 'sumLogRc', 'sumLogRc2'] as const) {
-            expect(Math.abs(f[key] - s[key]), `${key} at n = ${n}`).toBeLessThan(1e-6);
-          }
-          expect(Array.from(f.histogram)).toEqual(Array.from(s.histogram));
-          expect(Array.from(f.batchObserved)).toEqual(Array.from(s.batchObserved));
-        }
+        expectScansAgree(fast, slow, maxN);
       }),
       { numRuns: 400, seed: SEED },
     );

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { numberDifferences } from '../../helpers/numberDifferences';
+import { sessionErrorOf } from '../../helpers/sessionErrorOf';
 import { sha256 } from '@noble/hashes/sha2.js';
 import { bytesToHex } from '@noble/hashes/utils.js';
 import { analyzeSequence } from '../../../src/core/analyze';
@@ -9,7 +11,6 @@ import { PROGRAM_VERSION } from '../../../src/core/result/version';
 import { readSession, looksLikeSession } from '../../../src/core/session/readSession';
 import { SESSION_SCHEMA, sessionOf } from '../../../src/core/session/session';
 import type { Session } from '../../../src/core/session/session';
-import { SessionError } from '../../../src/core/session/sessionError';
 import { writeSession } from '../../../src/core/session/writeSession';
 import { randomSymbols } from '../../helpers/estimateFixtures';
 
@@ -35,25 +36,6 @@ function session(result: AnalysisResult = hostileResult()): Session {
     reading: { format: 'tokens', csvColumn: 'a,"b"' },
     savedAt: '2026-12-01T10:00:00.000Z',
   });
-}
-
-/** Paths where two JSON-like values differ under Object.is, walking the first one's keys. */
-function numberDifferences(a: unknown, b: unknown, path = ''): string[] {
-  if (typeof a === 'object' && a !== null) {
-    if (typeof b !== 'object' || b === null) return [path];
-    return Object.keys(a).flatMap((k) => numberDifferences((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], `${path}.${k}`));
-  }
-  return Object.is(a, b) ? [] : [`${path}: ${String(a)} vs ${String(b)}`];
-}
-
-function errorOf(text: string): SessionError {
-  try {
-    readSession(text);
-  } catch (error) {
-    if (error instanceof SessionError) return error;
-    throw error;
-  }
-  throw new Error('readSession accepted the text');
 }
 
 describe('session round trip', () => {
@@ -96,33 +78,33 @@ describe('readSession refuses bad files with a clear message', () => {
 
   it('not JSON: says so with the line and column of the error', () => {
     // A missing comma: the engine reports the offset of the next key (line 3, column 3).
-    const e = errorOf('{\n  "schema": "returnrate.session/1"\n  "program": {}\n}');
+    const e = sessionErrorOf('{\n  "schema": "returnrate.session/1"\n  "program": {}\n}');
     expect(e.code).toBe('not-json');
     expect(e.line).toBe(3);
     expect(e.column).toBe(3);
     expect(e.message).toMatch(/^this file is not a returnrate session: it is not valid JSON at line 3, column 3 \(/);
     // A message without a position still says it is not JSON.
-    expect(errorOf('{"schema": oops}').message).toMatch(/^this file is not a returnrate session: it is not valid JSON/);
+    expect(sessionErrorOf('{"schema": oops}').message).toMatch(/^this file is not a returnrate session: it is not valid JSON/);
   });
 
   it('JSON that is not a session, and an analysis result instead of a session', () => {
-    expect(errorOf('[1, 2]').message).toBe('this file is not a returnrate session: it holds an array, not an object');
-    expect(errorOf('{"a": 1}').message).toBe(`this file is not a returnrate session: it has no "schema": "${SESSION_SCHEMA}" field`);
-    expect(errorOf(JSON.stringify({ schema: ANALYSIS_SCHEMA })).message).toMatch(/is an analysis result .* not a session/);
+    expect(sessionErrorOf('[1, 2]').message).toBe('this file is not a returnrate session: it holds an array, not an object');
+    expect(sessionErrorOf('{"a": 1}').message).toBe(`this file is not a returnrate session: it has no "schema": "${SESSION_SCHEMA}" field`);
+    expect(sessionErrorOf(JSON.stringify({ schema: ANALYSIS_SCHEMA })).message).toMatch(/is an analysis result .* not a session/);
   });
 
   it('a newer or an older session schema names both versions', () => {
-    const newer = errorOf(JSON.stringify({ ...good(), schema: 'returnrate.session/2' }));
+    const newer = sessionErrorOf(JSON.stringify({ ...good(), schema: 'returnrate.session/2' }));
     expect(newer.code).toBe('schema-version');
     expect(newer.message).toBe('this session was saved by a newer returnrate (schema returnrate.session/2); this version reads returnrate.session/1');
-    expect(errorOf(JSON.stringify({ ...good(), schema: 'returnrate.session/0' })).message).toBe(
+    expect(sessionErrorOf(JSON.stringify({ ...good(), schema: 'returnrate.session/0' })).message).toBe(
       'this session was saved by an older returnrate (schema returnrate.session/0); this version reads returnrate.session/1',
     );
   });
 
   it('the embedded result must have the analysis schema this version reads', () => {
     const s = good();
-    const e = errorOf(JSON.stringify({ ...s, result: { ...(s['result'] as object), schema: 'returnrate.analysis/9' } }));
+    const e = sessionErrorOf(JSON.stringify({ ...s, result: { ...(s['result'] as object), schema: 'returnrate.analysis/9' } }));
     expect(e.code).toBe('schema-version');
     expect(e.message).toBe('the analysis inside this session has schema "returnrate.analysis/9"; this version reads returnrate.analysis/1');
   });
@@ -141,7 +123,7 @@ describe('readSession refuses bad files with a clear message', () => {
       [{ ...s, result: { ...result, entropy: undefined } }, 'result.entropy', 'the session is damaged: result.entropy should be an object but is a undefined'],
     ];
     for (const [bad, field, message] of cases) {
-      const e = errorOf(JSON.stringify(bad));
+      const e = sessionErrorOf(JSON.stringify(bad));
       expect(e.code).toBe('invalid-field');
       expect(e.field).toBe(field);
       expect(e.message).toBe(message);
@@ -160,7 +142,7 @@ describe('session with a symbolized input', () => {
 
   it('refuses a symbolization with an unknown missing-value policy, naming the field', () => {
     const text = writeSession(session()).replace('"format": "tokens",', `"format": "tokens",\n"symbolization": ${JSON.stringify({ ...symbolization, missingPolicy: 'zero' })},`);
-    const error = errorOf(text);
+    const error = sessionErrorOf(text);
     expect(error.code).toBe('invalid-field');
     expect(error.message).toContain('result.input.symbolization.missingPolicy');
   });

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { numberDifferences } from '../../helpers/numberDifferences';
+import { sessionErrorOf } from '../../helpers/sessionErrorOf';
 import { readSession } from '../../../src/core/session/readSession';
 import { sessionOf } from '../../../src/core/session/session';
 import type { Session } from '../../../src/core/session/session';
-import { SessionError } from '../../../src/core/session/sessionError';
 import { writeSession } from '../../../src/core/session/writeSession';
 import { calibrationBelongsTo } from '../../../src/core/session/calibrationBelongsTo';
 import { extrasFixture, HOSTILE_NAME, HOSTILE_NAME_B } from '../../helpers/sessionExtrasFixtures';
@@ -22,31 +23,12 @@ function session(extras: { calibration?: boolean; comparison?: boolean } = { cal
   });
 }
 
-/** Paths where two JSON-like values differ under Object.is, walking the first one's keys (nulls and -0 included). */
-function numberDifferences(a: unknown, b: unknown, path = ''): string[] {
-  if (typeof a === 'object' && a !== null) {
-    if (typeof b !== 'object' || b === null) return [path];
-    return Object.keys(a).flatMap((k) => numberDifferences((a as Json)[k], (b as Json)[k], `${path}.${k}`));
-  }
-  return Object.is(a, b) ? [] : [`${path}: ${String(a)} vs ${String(b)}`];
-}
-
 /** Counts nulls and numbers in a JSON-like value, to show the round trip had both to keep. */
 function census(v: unknown, acc = { nulls: 0, numbers: 0 }): { nulls: number; numbers: number } {
   if (v === null) acc.nulls++;
   else if (typeof v === 'number') acc.numbers++;
   else if (typeof v === 'object') for (const x of Object.values(v)) census(x, acc);
   return acc;
-}
-
-function errorOf(text: string): SessionError {
-  try {
-    readSession(text);
-  } catch (error) {
-    if (error instanceof SessionError) return error;
-    throw error;
-  }
-  throw new Error('readSession accepted the text');
 }
 
 describe('session with a calibration and a comparison', () => {
@@ -117,7 +99,7 @@ describe('readSession names the damaged field of a calibration or comparison', (
       [edit('comparison', (c) => (c['warnings'] = {})), 'comparison.warnings', 'should be an array but is an object'],
     ];
     for (const [text, field, should] of cases) {
-      const e = errorOf(text);
+      const e = sessionErrorOf(text);
       expect(e.code).toBe('invalid-field');
       expect(e.field).toBe(field);
       expect(e.message).toBe(`the session is damaged: ${field} ${should}`);
@@ -125,18 +107,18 @@ describe('readSession names the damaged field of a calibration or comparison', (
   });
 
   it('a calibration of other data or other settings is refused, naming the field that differs', () => {
-    const otherData = errorOf(edit('calibration', (c) => ((c['input'] as Json)['sha256'] = 'a'.repeat(64))));
+    const otherData = sessionErrorOf(edit('calibration', (c) => ((c['input'] as Json)['sha256'] = 'a'.repeat(64))));
     expect(otherData.field).toBe('calibration.input.sha256');
     expect(otherData.message).toBe(
       "the session is damaged: calibration.input.sha256 differs from result.input.sha256, so the calibration does not belong to the session's result",
     );
-    expect(errorOf(edit('calibration', (c) => ((c['settings'] as Json)['maxN'] = 30))).field).toBe('calibration.settings.maxN');
-    expect(errorOf(edit('calibration', (c) => ((c['input'] as Json)['symbols'] = 2999))).field).toBe('calibration.input.symbols');
+    expect(sessionErrorOf(edit('calibration', (c) => ((c['settings'] as Json)['maxN'] = 30))).field).toBe('calibration.settings.maxN');
+    expect(sessionErrorOf(edit('calibration', (c) => ((c['input'] as Json)['symbols'] = 2999))).field).toBe('calibration.input.symbols');
   });
 
   it('a calibration or comparison that is not an object is refused', () => {
     const s = good();
-    expect(errorOf(JSON.stringify({ ...s, calibration: [] })).message).toBe('the session is damaged: calibration should be an object but is an array');
-    expect(errorOf(JSON.stringify({ ...s, comparison: 'none' })).message).toBe('the session is damaged: comparison should be an object but is a string');
+    expect(sessionErrorOf(JSON.stringify({ ...s, calibration: [] })).message).toBe('the session is damaged: calibration should be an object but is an array');
+    expect(sessionErrorOf(JSON.stringify({ ...s, comparison: 'none' })).message).toBe('the session is damaged: comparison should be an object but is a string');
   });
 });

@@ -1,25 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import type { CalibrationModelFacts, ReplicateRecord } from '../../../src/core';
+import { ORDER_ONE_FACTS } from '../../helpers/calibrationFacts';
+import type { ReplicateRecord } from '../../../src/core';
 import { DEFAULT_SETTINGS } from '../../../src/core';
 import { restoreCalibration } from '../../../src/ui/store/calibrationSlice';
 import { bindActions, createAppStore, memoryStorage, persistedPart } from '../../../src/ui/store/store';
 import { calibrationMatches, calibrationView } from '../../../src/ui/view/calibrationView';
 
-const facts: CalibrationModelFacts = {
-  order: 1,
-  maxOrder: 2,
-  capReason: 'cap',
-  criterion: 'BIC',
-  observations: 1000,
-  scores: [],
-  states: 2,
-  transientStates: 0,
-  droppedTransitions: 0,
-  period: 1,
-  entropyRate: 1,
-  sigma2: 0.5,
-  rule: '',
-};
+const facts = ORDER_ONE_FACTS;
 const analysis = { input: { name: 'data.txt', sha256: 'ab', symbols: 1000 }, settings: DEFAULT_SETTINGS, entropy: { estimate: 1.1, ci95: [1.0, 1.2] as const } };
 const rec = (i: number, h: number): ReplicateRecord => ({ replicate: i, seed: i, entropy: h, entropyInterval: [h - 0.1, h + 0.1], entropyMethod: 'plugin-conditional', sigma2: 0.5, sigma2Interval: [0.4, 0.6] });
 
