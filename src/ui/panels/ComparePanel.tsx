@@ -1,9 +1,10 @@
 import './comparePanel.css';
-import { useCallback, useEffect, useState, type DragEvent } from 'react';
+import { useCallback, useState, type DragEvent } from 'react';
 import type { ComparisonResult } from '../../core';
 import { comparisonCaption, comparisonConvergenceFigure, comparisonQuantileFigure, type FigureSize } from '../../figures';
 import { DEMO_SCENARIOS } from '../../../workers/demoScenarios';
 import { FigureSlot } from '../charts/FigureSlot';
+import { useClock } from './useClock';
 import { comparisonRunner } from '../comparisonRunner';
 import { useAppState } from '../store/store';
 import { comparisonLines, comparisonProgressView, sideText } from '../view/comparisonView';
@@ -14,19 +15,6 @@ const REFERENCE = DEMO_SCENARIOS.filter((s) => s.kind === 'reference');
 const INVENTED = DEMO_SCENARIOS.filter((s) => s.kind === 'invented');
 /** Value of the select's "the input loaded above" choice (side A only). */
 const LOADED = 'loaded-input';
-/** How often the elapsed time is redrawn while a comparison runs. */
-const CLOCK_MS = 500;
-
-function useClock(running: boolean): number {
-  const [now, setNow] = useState(() => Date.now());
-  useEffect(() => {
-    if (!running) return;
-    const timer = window.setInterval(() => setNow(Date.now()), CLOCK_MS);
-    return () => window.clearInterval(timer);
-  }, [running]);
-  return now;
-}
-
 function LengthField({ which, length }: { readonly which: 'A' | 'B'; readonly length: number }) {
   const [text, setText] = useState<string | null>(null);
   const shown = text ?? String(length);

@@ -1,25 +1,11 @@
-import { useEffect, useState } from 'react';
 import { DEMO_SCENARIOS } from '../../../workers/demoScenarios';
 import { runner } from '../runner';
 import { useAppState } from '../store/store';
 import { chosenInputText } from '../view/inputOptions';
 import { progressView } from '../view/progressView';
+import { useClock } from './useClock';
 
 const demoTitle = (id: string): string => DEMO_SCENARIOS.find((s) => s.id === id)?.title ?? id;
-/** How often the elapsed time and the time left are redrawn while a run goes on. */
-const CLOCK_MS = 500;
-
-/** Clock time, ticking while `running` so the elapsed time moves between progress reports. */
-function useClock(running: boolean): number {
-  const [now, setNow] = useState(() => Date.now());
-  useEffect(() => {
-    if (!running) return;
-    const timer = window.setInterval(() => setNow(Date.now()), CLOCK_MS);
-    return () => window.clearInterval(timer);
-  }, [running]);
-  return now;
-}
-
 /** The one Run button, Cancel, what the next run reads, and the progress over block lengths n. */
 export function RunPanel() {
   const run = useAppState((s) => s.run);
