@@ -51,5 +51,6 @@ export default defineConfig({
     testTimeout: 60_000,
     hookTimeout: 60_000,
     pool: 'threads',
+    setupFiles: ['test/setup/fastCheckSeed.ts'],
   },
 });
