@@ -12,7 +12,7 @@ test('the page is cross-origin isolated and a file of a million symbols is analy
   const errors = collectErrors(page);
   const subWorkers: string[] = [];
   page.on('worker', (worker) => {
-    if (worker.url().includes('scanGroup')) subWorkers.push(worker.url());
+    if (worker.url().includes('scanJob')) subWorkers.push(worker.url());
   });
   const path = join(mkdtempSync(join(tmpdir(), 'returnrate-threads-')), 'million.txt');
   writeFileSync(path, twoStateChainText(1_050_000, STAY, 5));

@@ -1,6 +1,6 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, GroupRunner, InputSummary, LengthRow, LevelStats, ReadResult, ReaderOptions, ScanGroupResult, ScanGroupTask, Sequence } from '../src/core';
+import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPort, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
@@ -82,22 +82,18 @@ function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
 /** From this many symbols on, a cross-origin isolated page shares the scan among sub-workers. */
 const SPLIT_FROM_SYMBOLS = 1_000_000;
 
-/** One sub-worker per group; each ends when it has answered (or with this worker). */
-const subWorkerRunner: GroupRunner = (tasks) =>
-  Promise.all(
-    tasks.map(
-      (task: ScanGroupTask) =>
-        new Promise<ScanGroupResult>((resolve, reject) => {
-          const worker = new Worker(new URL('./scanGroup.worker.ts', import.meta.url), { type: 'module' });
-          worker.onmessage = (event: MessageEvent<ScanGroupResult>) => {
-            resolve(event.data);
-            worker.terminate();
-          };
-          worker.onerror = (event) => reject(new Error(`a scan sub-worker failed: ${event.message}`));
-          worker.postMessage(task, [task.order.buffer, task.words.buffer]);
-        }),
-    ),
-  );
+/** One sub-worker as the job pool sees it; it ends with the scan (or with this worker). */
+function subWorkerPort(): JobPort {
+  const worker = new Worker(new URL('./scanJob.worker.ts', import.meta.url), { type: 'module' });
+  return {
+    post: (message, transfer) => worker.postMessage(message, transfer),
+    listen: (onReply, onFailure) => {
+      worker.onmessage = (event: MessageEvent<JobReply>) => onReply(event.data);
+      worker.onerror = (event) => onFailure(new Error(`a scan sub-worker failed: ${event.message}`));
+    },
+    close: () => worker.terminate(),
+  };
+}
 
 /**
  * The analysis on one worker, or shared among navigator.hardwareConcurrency sub-workers when the
@@ -123,7 +119,12 @@ async function analyzeOnWorkers(
   const symbols = sequence.symbols;
   const shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
   shared.set(symbols);
-  return analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, subWorkerRunner, hooks);
+  const pool = jobPool(Array.from({ length: cores }, subWorkerPort));
+  try {
+    return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks);
+  } finally {
+    pool.close();
+  }
 }
 
 function release(callback: ProgressCallback): void {

@@ -1,11 +1,11 @@
 import { basename } from 'node:path';
-import { ANALYSIS_SET_SCHEMA, analyzeSequence, analyzeSequenceSplit, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
 import { checkMemory, fitsMemory } from './memoryBudget';
-import { sharedSymbols, threadRunner, threadsOption } from './scanThreads';
+import { analyzeOnThreads, threadsOption } from './scanThreads';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -169,10 +169,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
     },
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
   };
-  const result =
-    threads > 1
-      ? await analyzeSequenceSplit({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, threads, threadRunner, hooks)
-      : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
+  const result = threads > 1 ? await analyzeOnThreads(loaded.sequence, loaded.input, settings, threads, hooks) : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   const calibration =

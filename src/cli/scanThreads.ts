@@ -1,6 +1,6 @@
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import type { GroupRunner, ScanGroupResult, ScanGroupTask, SymbolArray } from '../core';
+import { analyzeSequenceSplit, jobPool, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence, type SymbolArray } from '../core';
 import { isPositiveInteger, numberOption } from './options';
 
 type Values = Record<string, string | boolean | undefined>;
@@ -31,29 +31,44 @@ function tsxBootstrap(): string {
   return `import(${JSON.stringify(api)}).then((m) => { m.register(); return import(${JSON.stringify(WORKER_URL.href)}); });`;
 }
 
-/** Runs one task on a fresh worker thread; the task's order and word arrays move to it. */
-function runOnThread(task: ScanGroupTask): Promise<ScanGroupResult> {
-  return new Promise((resolve, reject) => {
-    const started = performance.now();
-    const entries = task.order.length;
-    const worker = FROM_SOURCES ? new Worker(tsxBootstrap(), { eval: true }) : new Worker(WORKER_URL);
-    const debug = process.env.RETURNRATE_DEBUG === '1';
-    if (debug) worker.once('online', () => process.stderr.write(`returnrate: debug: scan thread online after ${(performance.now() - started).toFixed(0)} ms\n`));
-    worker.once('message', (result: ScanGroupResult) => {
-      if (debug) process.stderr.write(`returnrate: debug: scan thread done after ${(performance.now() - started).toFixed(0)} ms (${entries} entries from n = ${task.firstN}, split ${(started / 1000).toFixed(2)} s after start)\n`);
-      resolve(result);
+/** One worker thread as the job pool sees it. */
+function threadPort(): JobPort {
+  const worker = FROM_SOURCES ? new Worker(tsxBootstrap(), { eval: true }) : new Worker(WORKER_URL);
+  let closing = false;
+  return {
+    post: (message, transfer) => worker.postMessage(message, transfer),
+    listen: (onReply, onFailure) => {
+      worker.on('message', onReply);
+      worker.on('error', onFailure);
+      worker.on('exit', (code) => {
+        if (!closing) onFailure(new Error(`a scan thread stopped with exit code ${code}`));
+      });
+    },
+    close: () => {
+      closing = true;
       void worker.terminate();
-    });
-    worker.once('error', reject);
-    worker.once('exit', (code) => {
-      if (code !== 0) reject(new Error(`a scan thread stopped with exit code ${code}`));
-    });
-    worker.postMessage(task, [task.order.buffer, task.words.buffer] as ArrayBuffer[]);
-  });
+    },
+  };
 }
 
-/** A GroupRunner that gives every group a worker thread of its own. */
-export const threadRunner: GroupRunner = (tasks) => Promise.all(tasks.map(runOnThread));
+/**
+ * `count` worker threads for one shared scan, started now so that they are ready by the first
+ * batch; close() when the scan is over (they would keep the process alive). With RETURNRATE_DEBUG=1
+ * each batch's kind and time go to standard error.
+ */
+export function startScanThreads(count: number): JobPool {
+  const pool = jobPool(Array.from({ length: count }, threadPort));
+  if (process.env.RETURNRATE_DEBUG !== '1') return pool;
+  const started = performance.now();
+  const run: ScanRunner = async (jobs) => {
+    const from = performance.now();
+    const results = await pool.run(jobs);
+    const seconds = (t: number) => ((t - started) / 1000).toFixed(2);
+    process.stderr.write(`returnrate: debug: ${jobs.length} ${jobs[0]?.kind ?? ''} jobs from ${seconds(from)} s to ${seconds(performance.now())} s\n`);
+    return results;
+  };
+  return { run, close: pool.close };
+}
 
 /** The symbols in a SharedArrayBuffer, so every thread reads the one copy. */
 export function sharedSymbols(symbols: SymbolArray): SymbolArray {
@@ -61,4 +76,20 @@ export function sharedSymbols(symbols: SymbolArray): SymbolArray {
   const copy = new (symbols.constructor as new (b: SharedArrayBuffer) => SymbolArray)(shared);
   copy.set(symbols);
   return copy;
+}
+
+/** The analysis shared among `threads` worker threads, which end with it. */
+export async function analyzeOnThreads(
+  sequence: Sequence,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  threads: number,
+  hooks: AnalysisHooks,
+): Promise<AnalysisResult> {
+  const pool = startScanThreads(threads);
+  try {
+    return await analyzeSequenceSplit({ ...sequence, symbols: sharedSymbols(sequence.symbols) }, input, settings, threads, pool.run, hooks);
+  } finally {
+    pool.close();
+  }
 }

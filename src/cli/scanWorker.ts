@@ -1,14 +1,10 @@
-// Worker thread of `analyze --threads W`: refines one group of classes (scanGroup) and posts its
-// per-level sums back, moving the buffers instead of copying them.
+// Worker thread of `analyze --threads W`: runs the jobs of a shared scan (range passes and class
+// groups) and posts each result back, moving the buffers instead of copying them.
 import { parentPort } from 'node:worker_threads';
-// The engine file itself rather than the core's barrel: the thread then loads about 20 kB of
-// bundle instead of the whole core (half a megabyte, 0.2-0.4 s to start on this machine).
-import { scanGroup, type ScanGroupTask } from '../core/returns/splitScan';
+// The engine files themselves rather than the core's barrel: the thread then loads a small part of
+// the bundle instead of the whole core (half a megabyte, 0.2-0.4 s to start on this machine).
+import { answerJob, type JobRequest } from '../core/returns/jobPool';
 
 const port = parentPort;
 if (port === null) throw new Error('scanWorker.ts runs only as a worker thread');
-port.on('message', (task: ScanGroupTask) => {
-  const result = scanGroup(task);
-  const buffers = [result.paths.buffer, result.pathCounts.buffer, ...result.sums.flatMap((s) => [s.batches.buffer, s.histogram.buffer])];
-  port.postMessage(result, buffers as ArrayBuffer[]);
-});
+port.on('message', (request: JobRequest) => answerJob(request, (reply, transfer) => port.postMessage(reply, transfer)));

@@ -1,11 +1,12 @@
 import { analyzeScannedSequence, scanOptionsOf, validateSettings, type AnalysisHooks } from './analyze';
 import type { AnalysisResult, AnalysisSettings, InputSummary } from './result/analysisResult';
-import { scanReturnsSplit, type GroupRunner } from './returns/splitScan';
+import type { ScanRunner } from './returns/scanJobs';
+import { scanReturnsSplit } from './returns/splitScan';
 import type { Sequence } from './sequence/sequence';
 
 /**
- * analyzeSequence with the scan shared among `groups` after the first levels (scanReturnsSplit);
- * `runGroups` decides where the groups run (worker threads in hosts, this process in tests).
+ * analyzeSequence with the scan shared among `groups` threads (scanReturnsSplit); `run` decides
+ * where its jobs run (worker threads in hosts, this process in tests).
  * @throws RangeError for invalid settings; ScanCancelled when hooks.shouldStop returns true
  */
 export async function analyzeSequenceSplit(
@@ -13,10 +14,10 @@ export async function analyzeSequenceSplit(
   input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
   settings: AnalysisSettings,
   groups: number,
-  runGroups: GroupRunner,
+  run: ScanRunner,
   hooks: AnalysisHooks = {},
 ): Promise<AnalysisResult> {
   validateSettings(settings, sequence.symbols.length);
-  const scan = await scanReturnsSplit(sequence.symbols, sequence.alphabet.length, scanOptionsOf(settings, hooks), groups, runGroups);
+  const scan = await scanReturnsSplit(sequence.symbols, sequence.alphabet.length, scanOptionsOf(settings, hooks), groups, run);
   return analyzeScannedSequence(sequence, scan, input, settings, hooks);
 }

@@ -153,5 +153,9 @@ export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, byt
 export { pageMemoryCheck, PAGE_MEMORY_BUDGET_BYTES } from './returns/pageMemoryCheck';
 export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
 export { scanReturnsSplit, scanGroup, classRuns, assignClasses } from './returns/splitScan';
-export type { ScanGroupTask, ScanGroupResult, GroupRunner } from './returns/splitScan';
+export type { ScanGroupTask, ScanGroupResult } from './returns/splitScan';
+export { runScanJob, inThisThread, jobTransfers, resultTransfers } from './returns/scanJobs';
+export type { ScanJob, ScanJobResult, ScanRunner } from './returns/scanJobs';
+export { jobPool, answerJob } from './returns/jobPool';
+export type { JobPort, JobPool, JobRequest, JobReply } from './returns/jobPool';
 export { analyzeSequenceSplit } from './analyzeSplit';

@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { scanReturns } from '../../src/core/returns/scanReturns';
 import { scanReturnsSplit } from '../../src/core/returns/splitScan';
-import { sharedSymbols, threadRunner } from '../../src/cli/scanThreads';
+import { sharedSymbols, startScanThreads } from '../../src/cli/scanThreads';
 import { cli, failureLine, tempFolder } from './cliHarness';
 
 const folder = tempFolder('threads');
@@ -22,11 +22,12 @@ function symbols(length: number, alphabet: number, seed: number): Uint8Array {
 }
 
 describe('scan on worker threads', () => {
-  it('gives exactly the return times and counts of the one-thread scan (real worker_threads, shared symbols)', async () => {
+  it('gives exactly the return times and counts of the one-thread scan (real worker_threads, a pool serving every batch, shared symbols)', async () => {
     const x = symbols(30000, 3, 11);
     const options = { maxN: 14, sampleTarget: 30000 };
     const single = scanReturns(x, 3, options);
-    const threaded = await scanReturnsSplit(sharedSymbols(x), 3, options, 2, threadRunner);
+    const pool = startScanThreads(2);
+    const threaded = await scanReturnsSplit(sharedSymbols(x), 3, options, 2, pool.run).finally(pool.close);
     // The oracle is scanReturns (checked against the brute-force definitions in its own tests).
     expect(threaded.paths).toEqual(single.paths);
     single.levels.forEach((want, j) => {

@@ -1,3 +1,4 @@
+import type { LevelSums } from './collectReturns';
 import type { LevelStats } from './levelStats';
 
 /**
@@ -24,5 +25,20 @@ export function addReturnSums(a: ReturnSums, b: ReturnSums): ReturnSums {
     sumLog2: a.sumLog2 + b.sumLog2,
     sumLogRc: a.sumLogRc + b.sumLogRc,
     sumLogRc2: a.sumLogRc2 + b.sumLogRc2,
+  };
+}
+
+/** Two shares' sums of one level (groups of classes or ranges of positions), added (a new object; neither input is changed). */
+export function addSums(a: LevelSums, b: LevelSums): LevelSums {
+  const batches = Float64Array.from(a.batches);
+  for (let i = 0; i < batches.length; i++) batches[i] += b.batches[i];
+  const histogram = Float64Array.from(a.histogram);
+  for (let i = 0; i < histogram.length; i++) histogram[i] += b.histogram[i];
+  return {
+    classes: a.classes + b.classes,
+    ...addReturnSums(a, b),
+    matchCount: a.matchCount + b.matchCount,
+    batches,
+    histogram,
   };
 }

@@ -1,11 +1,14 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
-import { addReturnSums } from './addReturnSums';
+import { addSums } from './addReturnSums';
 import { collectReturns, type LevelSums, type ReturnGeometry } from './collectReturns';
 import type { LevelStats, ReturnScan } from './levelStats';
 import { partitionBinaryLevel } from './partitionBinaryLevel';
 import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
+import { assembleOrder, classSlices, gatherSlices, prefixByRanges } from './prefixByRanges';
+import { sharedBuffer } from './sharedBuffer';
+import type { ScanJob, ScanRunner } from './scanJobs';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
-import { completePaths, emptySums, levelFromSums, refreshWords, type ScanOptions } from './scanReturns';
+import { completePaths, emptySums, levelFromSums, scanReturns, type ScanOptions } from './scanReturns';
 
 /**
  * The classes of one share of the work after the split, and what is needed to refine them alone.
@@ -18,9 +21,15 @@ export interface ScanGroupTask {
   /** First block length this group refines (the split level + 1) and the last. */
   readonly firstN: number;
   readonly maxN: number;
-  /** The group's classes after the split level: positions, class starts marked ~p. Owned by the group. */
-  readonly order: Int32Array;
-  /** Carried words of the same entries (empty for alphabets above 256). Owned by the group. */
+  /** Where the group's classes after the split level are: slices of shared arrays of positions,
+   * each class ascending (classSlices: [piece, start, length, 1 at a class start] per slice). */
+  readonly pieces: readonly Int32Array[];
+  readonly slices: Int32Array;
+  /** The carried words of the same entries at the refresh before firstN, or empty arrays: then the
+   * group gathers them from `words`. */
+  readonly pieceWords: readonly Uint16Array[];
+  /** The carried words at offset 0 of every position (packedWords.ts; shared, read only; empty for
+   * alphabets above 256). */
   readonly words: Uint16Array;
   readonly batchLength: number;
   readonly batchCount: number;
@@ -37,11 +46,12 @@ export interface ScanGroupResult {
   readonly pathCounts: Float64Array;
 }
 
-/** Runs the groups' tasks: in this process (tests, one thread) or on worker threads (hosts). */
-export type GroupRunner = (tasks: ScanGroupTask[]) => ScanGroupResult[] | Promise<ScanGroupResult[]>;
-
 /** Classes per group wanted at the split, so that sharing them by size balances well. */
 const CLASSES_PER_GROUP = 16;
+
+/** Jobs per group after the split: more than one, so that a thread whose jobs ran short takes the
+ * next one while another is still busy (the work of a class is not known from its size alone). */
+const JOBS_PER_GROUP = 4;
 
 /**
  * Refines one group's classes for every level from firstN to maxN, with the same partition and
@@ -49,7 +59,7 @@ const CLASSES_PER_GROUP = 16;
  * only ever splits into subclasses of itself, so no communication is needed.
  */
 export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): ScanGroupResult {
-  const { symbols, alphabetSize, firstN, maxN, batchLength, batchCount, stride, matchWindow } = task;
+  const { symbols, alphabetSize, firstN, maxN, batchLength, batchCount, stride, matchWindow, words: allWords } = task;
   const N = symbols.length;
   const bits = Math.max(1, Math.ceil(Math.log2(alphabetSize)));
   const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
@@ -61,10 +71,15 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
   const pathCounts = new Float64Array(sampleCount * maxN);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
-  let order: Int32Array = task.order;
-  let next: Int32Array = new Int32Array(order.length);
-  let words: Uint16Array = task.words;
-  let nextWords: Uint16Array = new Uint16Array(packed ? order.length : 0);
+  let entries = 0;
+  for (let i = 2; i < task.slices.length; i += 4) entries += task.slices[i];
+  let order: Int32Array = new Int32Array(entries);
+  let next: Int32Array = new Int32Array(entries);
+  // Carried words as in scanReturns, refreshed at multiples of perWord from the shared array.
+  let words: Uint16Array = new Uint16Array(packed ? entries : 0);
+  let nextWords: Uint16Array = new Uint16Array(packed ? entries : 0);
+  gatherSlices(task.pieces, task.pieceWords, task.slices, order, words);
+  const wordsGiven = task.pieceWords.some((w) => w.length > 0);
   const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, order.length);
   const sums: LevelSums[] = [];
   const active: number[] = [];
@@ -74,7 +89,7 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
     if (activeLength > 0) {
       if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
       const wordShift = ((n - 1) % perWord) * bits;
-      if (packed && wordShift === 0) gatherWords(symbols, n - 1, bits, perWord, order, activeLength, words);
+      if (packed && (wordShift === 0 || (n === firstN && !wordsGiven))) gatherWords(allWords, n - 1 - ((n - 1) % perWord), order, activeLength, words);
       const partition = binary ? partitionBinaryLevel : partitionLevel;
       const split = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
       collectReturns(next, split.active, n, geometry, sample, null, level);
@@ -103,23 +118,12 @@ function refinementBuffers(symbols: SymbolArray, alphabetSize: number, bits: num
   };
 }
 
-/**
- * words[k] = the next perWord symbols from offset on of the position at order[k], read directly
- * (the perWord symbols are adjacent, usually one cache line). scanReturns instead builds every
- * position's word in a rolling pass over the whole sequence; a group holds only a share of the
- * positions, so that pass (and its N-entry buffer) would cost every group the whole sequence.
- */
-function gatherWords(symbols: SymbolArray, offset: number, bits: number, perWord: number, order: Int32Array, activeLength: number, words: Uint16Array): void {
-  const N = symbols.length;
+/** words[k] = the carried word at `offset` of the position at order[k]: allWords[p + offset]. */
+function gatherWords(allWords: Uint16Array, offset: number, order: Int32Array, activeLength: number, words: Uint16Array): void {
   for (let k = 0; k < activeLength; k++) {
     let p = order[k];
     if (p < 0) p = ~p;
-    let w = 0;
-    for (let j = 0; j < perWord; j++) {
-      const q = p + offset + j;
-      if (q < N) w |= symbols[q] << (j * bits);
-    }
-    words[k] = w;
+    words[k] = allWords[p + offset];
   }
 }
 
@@ -162,13 +166,17 @@ export function assignClasses(sizes: ArrayLike<number>, groups: number): number[
 }
 
 /**
- * scanReturns with the work shared among `groups` after the first levels: once the classes number
- * at least 16 per group and none holds more than 1/groups of the positions in play, they are shared
- * among `groups` by size (assignClasses), each group refined on its own for all later n (runGroups may run them on worker threads), and the groups'
- * sums are added per level. Return times and every count are exactly those of scanReturns; sums of
- * logarithms agree to rounding (they are added in a different grouping). Levels before the split
- * are reported through onLevel as they finish, later ones after the groups are done.
- * @param classesPerGroup classes per group wanted before splitting (default 16; tests split earlier)
+ * scanReturns with the work shared among `groups` threads from the first level on. Levels up to a
+ * small depth (whose blocks fit a table, prefixLevels.ts) are computed by equal ranges of positions;
+ * from there the classes of equal blocks are independent, so once they number at least
+ * `classesPerGroup` per group and none holds more than 1/groups of the positions in play, they are
+ * shared out as JOBS_PER_GROUP jobs per group, balanced by size (assignClasses), each refined on its
+ * own for all later n; a free thread takes the next job (jobPool.ts). When the classes at the depth
+ * are too few or too uneven, this thread refines them further until they are not. The sums of the
+ * shares are added per level. Return times and every count are exactly those of scanReturns; sums
+ * of logarithms agree to rounding (the same terms, added in another grouping). Levels are reported
+ * through onLevel after each shared step, in order.
+ * @param classesPerGroup classes per group wanted before sharing (default 64; tests share earlier)
  * @throws RangeError as scanReturns, and for captureLevel (not supported here)
  */
 export async function scanReturnsSplit(
@@ -176,7 +184,7 @@ export async function scanReturnsSplit(
   alphabetSize: number,
   options: ScanOptions,
   groups: number,
-  runGroups: GroupRunner,
+  run: ScanRunner,
   classesPerGroup = CLASSES_PER_GROUP,
 ): Promise<ReturnScan> {
   const N = symbols.length;
@@ -187,6 +195,7 @@ export async function scanReturnsSplit(
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) throw new RangeError(`alphabetSize must be a positive integer; got ${alphabetSize}`);
   if (!Number.isInteger(groups) || groups < 1) throw new RangeError(`groups must be a whole number >= 1; got ${groups}`);
   if ((options.captureLevel ?? 0) > 0) throw new RangeError('captureLevel needs the single-threaded scan');
+  if (groups === 1) return scanReturns(symbols, alphabetSize, options);
   const batchLength = options.batchLength ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.batchTarget ?? 256)));
   const batchCount = Math.ceil(N / batchLength);
   const stride = options.sampleStride ?? powerOfTwoAtLeast(Math.ceil(N / Math.max(1, options.sampleTarget ?? 256)));
@@ -196,22 +205,12 @@ export async function scanReturnsSplit(
   const shouldStop = options.shouldStop;
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
   const pathCounts = new Float64Array(sampleCount * maxN);
-
-  // Levels before the split: the loop of scanReturns.
-  let order = new Int32Array(N);
-  let next = new Int32Array(N);
   const bits = Math.max(1, Math.ceil(Math.log2(alphabetSize)));
   const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
   const packed = perWord > 1;
-  let words = new Uint16Array(packed ? N : 0);
-  let nextWords = new Uint16Array(packed ? N : 0);
-  for (let i = 0; i < N; i++) order[i] = i;
-  if (N > 0) order[0] = ~0;
-  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, N);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
   const levels: LevelStats[] = [];
-  let activeLength = N;
   let firstEmpty = maxN + 1; // first level after which nothing was left in play
   const finish = (n: number, sums: LevelSums, active: number): void => {
     const level = levelFromSums(n, N - n + 1, sums, N - n + 1 - active, batchCount);
@@ -219,57 +218,85 @@ export async function scanReturnsSplit(
     if (active === 0 && firstEmpty > maxN) firstEmpty = n;
     options.onLevel?.(level, active);
   };
-  let n = 1;
-  let split = false;
-  for (; n <= maxN && !split; n++) {
-    if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-    const sums = emptySums(bins, batchCount);
-    if (activeLength > 0) {
-      const wordShift = ((n - 1) % perWord) * bits;
-      if (packed && wordShift === 0) refreshWords(symbols, n - 1, bits, perWord, order, activeLength, words, nextWords);
-      const partition = alphabetSize === 2 ? partitionBinaryLevel : partitionLevel;
-      const outcome = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
-      collectReturns(next, outcome.active, n, geometry, sample, null, sums);
-      activeLength = outcome.active;
-      [order, next] = [next, order];
-      [words, nextWords] = [nextWords, words];
+  // Filled by the range passes; read by every later refresh of the carried words, in any thread.
+  const allWords = new Uint16Array(packed ? sharedBuffer(2 * N) : new ArrayBuffer(0));
+  const mergePaths = (from: { paths: Float64Array; pathCounts: Float64Array }): void => {
+    for (let k = 0; k < paths.length; k++) {
+      if (!Number.isNaN(from.paths[k])) {
+        paths[k] = from.paths[k];
+        pathCounts[k] = from.pathCounts[k];
+      }
     }
-    finish(n, sums, activeLength);
-    // The largest class is only looked for once there are classes enough (one pass over the order).
-    split = groups > 1 && activeLength > 0 && sums.classes >= classesPerGroup * groups && classRuns(order, activeLength).largest * groups <= activeLength;
-  }
+  };
+  const wantedClasses = classesPerGroup * groups;
+  const shareable = (classSizes: Int32Array, active: number, classes: number): boolean =>
+    active > 0 && classes >= wantedClasses && largestOf(classSizes) * groups <= active;
 
-  if (split && n <= maxN) {
-    const runs = classRuns(order, activeLength);
-    const sizes = runs.ends.map((e, i) => e - runs.starts[i]);
-    const tasks: ScanGroupTask[] = assignClasses(sizes, groups).map((members) => {
-      let length = 0;
-      for (const i of members) length += sizes[i];
-      const groupOrder = new Int32Array(length);
-      const groupWords = new Uint16Array(packed ? length : 0);
-      let at = 0;
-      for (const i of members) {
-        groupOrder.set(order.subarray(runs.starts[i], runs.ends[i]), at);
-        if (packed) groupWords.set(words.subarray(runs.starts[i], runs.ends[i]), at);
-        at += sizes[i];
+  if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
+  const layout = { batchLength, batchCount, stride, matchWindow, maxN, bins };
+  const prefix = await prefixByRanges(symbols, alphabetSize, groups, wantedClasses, layout, allWords, run);
+  const depth = prefix.depth;
+  prefix.sums.forEach((sums, j) => finish(j + 1, sums, prefix.active[j]));
+  mergePaths(prefix);
+  let n = depth + 1;
+  let activeLength = prefix.active[depth - 1];
+  const jobOf = (pieces: readonly Int32Array[], pieceWords: readonly Uint16Array[], slices: Int32Array): ScanJob => ({
+    kind: 'group',
+    task: { symbols, alphabetSize, firstN: n, maxN, pieces, pieceWords, slices, words: allWords, batchLength, batchCount, stride, matchWindow },
+  });
+  const jobCount = (classes: number): number => Math.min(classes, groups * JOBS_PER_GROUP);
+  // This thread refines the classes further while they are too few or too uneven to share: the
+  // order once they are (n is then the first level left), or null when maxN comes first.
+  const refineUntilShareable = (start: Int32Array): Int32Array | null => {
+    let order: Int32Array = start;
+    let next: Int32Array = new Int32Array(activeLength);
+    let words: Uint16Array = new Uint16Array(packed ? activeLength : 0);
+    let nextWords: Uint16Array = new Uint16Array(packed ? activeLength : 0);
+    const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, activeLength);
+    for (let loaded = false; n <= maxN; n++) {
+      if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
+      const sums = emptySums(bins, batchCount);
+      if (activeLength > 0) {
+        const wordShift = ((n - 1) % perWord) * bits;
+        if (packed && (wordShift === 0 || !loaded)) gatherWords(allWords, n - 1 - ((n - 1) % perWord), order, activeLength, words);
+        loaded = true;
+        const partition = alphabetSize === 2 ? partitionBinaryLevel : partitionLevel;
+        const outcome = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
+        collectReturns(next, outcome.active, n, geometry, sample, null, sums);
+        activeLength = outcome.active;
+        [order, next] = [next, order];
+        [words, nextWords] = [nextWords, words];
       }
-      return { symbols, alphabetSize, firstN: n, maxN, order: groupOrder, words: groupWords, batchLength, batchCount, stride, matchWindow };
-    });
-    // The whole-sequence arrays are not needed any more; let them go before the groups allocate
-    // (the async function's frame would keep them alive until it returns).
-    // eslint-disable-next-line no-useless-assignment
-    order = next = new Int32Array(0);
-    // eslint-disable-next-line no-useless-assignment
-    words = nextWords = new Uint16Array(0);
-    const results = await runGroups(tasks);
-    for (const r of results) {
-      for (let k = 0; k < paths.length; k++) {
-        if (!Number.isNaN(r.paths[k])) {
-          paths[k] = r.paths[k];
-          pathCounts[k] = r.pathCounts[k];
-        }
+      finish(n, sums, activeLength);
+      if (n < maxN && activeLength > 0 && sums.classes >= wantedClasses && classRuns(order, activeLength).largest * groups <= activeLength) {
+        n++;
+        return order;
       }
     }
+    return null;
+  };
+  let jobs: ScanJob[] | null = null;
+  if (n <= maxN && shareable(prefix.classSizes, activeLength, prefix.sums[depth - 1].classes)) {
+    // The usual case: the groups read their classes straight from the ranges' shared layouts.
+    const blocks = Array.from(prefix.classSizes.keys()).filter((b) => prefix.classSizes[b] > 0);
+    const shares = assignClasses(blocks.map((b) => prefix.classSizes[b]), jobCount(blocks.length));
+    jobs = shares.map((members) => jobOf(prefix.pieces, prefix.pieceWords, classSlices(prefix, members.map((i) => blocks[i]))));
+  } else if (n <= maxN && activeLength > 0) {
+    const refined = refineUntilShareable(assembleOrder(prefix, activeLength));
+    if (refined !== null) {
+      const runs = classRuns(refined, activeLength);
+      const sizes = runs.ends.map((e, i) => e - runs.starts[i]);
+      // One shared piece, markers taken off: the slices say where classes start.
+      const piece = new Int32Array(sharedBuffer(4 * activeLength));
+      for (let k = 0; k < activeLength; k++) piece[k] = refined[k] < 0 ? ~refined[k] : refined[k];
+      jobs = assignClasses(sizes, jobCount(sizes.length)).map((members) =>
+        jobOf([piece], [], Int32Array.from(members.flatMap((i) => [0, runs.starts[i], sizes[i], 1]))),
+      );
+    }
+  }
+  if (jobs !== null) {
+    const results = (await run(jobs)) as ScanGroupResult[];
+    results.forEach(mergePaths);
     for (let j = 0; n <= maxN; n++, j++) {
       const sums = results.map((r) => r.sums[j]).reduce(addSums);
       finish(n, sums, results.reduce((s, r) => s + r.active[j], 0));
@@ -291,17 +318,8 @@ export async function scanReturnsSplit(
   };
 }
 
-/** Two groups' sums of one level, added (a new object; neither input is changed). */
-export function addSums(a: LevelSums, b: LevelSums): LevelSums {
-  const batches = Float64Array.from(a.batches);
-  for (let i = 0; i < batches.length; i++) batches[i] += b.batches[i];
-  const histogram = Float64Array.from(a.histogram);
-  for (let i = 0; i < histogram.length; i++) histogram[i] += b.histogram[i];
-  return {
-    classes: a.classes + b.classes,
-    ...addReturnSums(a, b),
-    matchCount: a.matchCount + b.matchCount,
-    batches,
-    histogram,
-  };
+function largestOf(values: Int32Array): number {
+  let largest = 0;
+  for (const v of values) if (v > largest) largest = v;
+  return largest;
 }

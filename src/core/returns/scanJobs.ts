@@ -1,0 +1,53 @@
+import { countPrefixes, scanPrefixLevels, type PrefixCountResult, type PrefixCountTask, type PrefixLevelsResult, type PrefixLevelsTask } from './prefixLevels';
+import { scanGroup, type ScanGroupResult, type ScanGroupTask } from './splitScan';
+
+/** One piece of a shared scan, as plain data that can be posted to a worker thread. */
+export type ScanJob =
+  | { readonly kind: 'count'; readonly task: PrefixCountTask }
+  | { readonly kind: 'levels'; readonly task: PrefixLevelsTask }
+  | { readonly kind: 'group'; readonly task: ScanGroupTask };
+
+export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult;
+
+/** Runs a batch of jobs (in this process in tests, on worker threads in hosts); results in job order. */
+export type ScanRunner = (jobs: ScanJob[]) => ScanJobResult[] | Promise<ScanJobResult[]>;
+
+export function runScanJob(job: ScanJob): ScanJobResult {
+  switch (job.kind) {
+    case 'count':
+      return countPrefixes(job.task);
+    case 'levels':
+      return scanPrefixLevels(job.task);
+    case 'group':
+      return scanGroup(job.task);
+  }
+}
+
+/** A runner that runs every job here, one after the other. */
+export const inThisThread: ScanRunner = (jobs) => jobs.map(runScanJob);
+
+/** Buffers a job owns alone and can move to its thread (never the shared symbols). */
+export function jobTransfers(job: ScanJob): ArrayBuffer[] {
+  switch (job.kind) {
+    case 'count':
+      return [];
+    case 'levels':
+      return movable([job.task.counts, job.task.after]);
+    case 'group':
+      return movable([job.task.slices]);
+  }
+}
+
+/** Buffers of a result, moved back to the caller. */
+export function resultTransfers(result: ScanJobResult): ArrayBuffer[] {
+  if ('first' in result) return movable([result.counts, result.first]);
+  const perLevel = result.sums.flatMap((s) => [s.batches, s.histogram]);
+  const own = 'laidOut' in result ? [result.laidOut, result.laidWords] : [];
+  return movable([result.paths, result.pathCounts, ...perLevel, ...own]);
+}
+
+function movable(arrays: ArrayBufferView[]): ArrayBuffer[] {
+  const buffers = new Set<ArrayBuffer>();
+  for (const a of arrays) if (a.buffer instanceof ArrayBuffer) buffers.add(a.buffer);
+  return [...buffers];
+}
