@@ -5,7 +5,8 @@
 // 3. the memory estimate (estimatePeakMemory) against the measured peak resident size.
 // Sizes: BENCH_SCALE_SIZES (default 1e6,1e7); runs per thread count: BENCH_REPEATS (default 3, the
 // fastest counts). Files are the cached ones of scripts/bench.ts.
-import { spawnSync } from 'node:child_process';
+import { execFile, spawnSync } from 'node:child_process';
+import { promisify } from 'node:util';
 import { readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -37,13 +38,31 @@ const CASES = [
   { label: 'Markov [[.9,.1],[.4,.6]]', spec: 'markov:0.9,0.1;0.4,0.6' },
 ];
 
-function run(file: string, extra: string[], json?: string): Timing {
+function analyzeArgs(file: string, extra: string[], json?: string): string[] {
   const args = ['bin/returnrate.mjs', 'analyze', file, '--format', 'chars', '--max-n', String(maxN), '--quiet', '--timing', ...extra];
-  if (json !== undefined) args.push('--json', json);
-  const p = spawnSync(process.execPath, args, { encoding: 'utf8', maxBuffer: 1 << 26 });
-  const line = p.stderr.split('\n').find((l) => l.startsWith('timing '));
-  if (p.status !== 0 || line === undefined) throw new Error(`run failed: ${p.stderr.trim().split('\n').pop() ?? ''}`);
+  return json === undefined ? args : [...args, '--json', json];
+}
+
+function timingOf(stderr: string): Timing {
+  const line = stderr.split('\n').find((l) => l.startsWith('timing '));
+  if (line === undefined) throw new Error(`run failed: ${stderr.trim().split('\n').pop() ?? ''}`);
   return JSON.parse(line.slice('timing '.length)) as Timing;
+}
+
+function run(file: string, extra: string[], json?: string): Timing {
+  const p = spawnSync(process.execPath, analyzeArgs(file, extra, json), { encoding: 'utf8', maxBuffer: 1 << 26 });
+  if (p.status !== 0) throw new Error(`run failed: ${p.stderr.trim().split('\n').pop() ?? ''}`);
+  return timingOf(p.stderr);
+}
+
+/**
+ * Two one-thread runs at the same time, as two processes: the slowdown each suffers from the other
+ * (shared caches and memory) bounds what two threads of one run can gain on this machine.
+ */
+async function concurrentPair(file: string): Promise<[Timing, Timing]> {
+  const runAsync = async (): Promise<Timing> => timingOf((await promisify(execFile)(process.execPath, analyzeArgs(file, ['--threads', '1']), { maxBuffer: 1 << 26 })).stderr);
+  const [a, b] = await Promise.all([runAsync(), runAsync()]);
+  return [a, b];
 }
 
 const mb = (b: number): string => (b / 1e6).toFixed(0);
@@ -60,8 +79,11 @@ for (const c of CASES) {
       ones.push(run(file, ['--threads', '1']));
       twos.push(run(file, ['--threads', '2']));
     }
+    const pairs: number[] = [];
+    for (let i = 0; i < repeats; i++) pairs.push(Math.max(...(await concurrentPair(file)).map((t) => t.analysisSeconds)));
     const fastest = (ts: Timing[]): Timing => ts.reduce((a, b) => (b.analysisSeconds < a.analysisSeconds ? b : a));
     const [one, two] = [fastest(ones), fastest(twos)];
+    const ceiling = one.analysisSeconds / Math.min(...pairs);
     const efficiency = one.analysisSeconds / (2 * two.analysisSeconds);
     const ratio = one.estimatedPeakBytes / one.peakRssBytes;
     console.log(
@@ -70,6 +92,7 @@ for (const c of CASES) {
     );
     const all = (ts: Timing[]): string => ts.map((t) => t.analysisSeconds.toFixed(2)).join(', ');
     console.log(`  all runs: 1 thread ${all(ones)} s; 2 threads ${all(twos)} s`);
+    console.log(`  two 1-thread runs at once: the slower took ${pairs.map((x) => x.toFixed(2)).join(', ')} s, so this machine lets 2 threads reach at most ${(100 * ceiling).toFixed(0)}%; reached ${(100 * efficiency / ceiling).toFixed(0)}% of that`);
     console.log(`  2 threads: estimate ${mb(two.estimatedPeakBytes)} MB, peak ${mb(two.peakRssBytes)} MB`);
   }
 }

@@ -226,13 +226,13 @@ export function scanPrefixLevels(task: PrefixLevelsTask): PrefixLevelsResult {
         if (id < 0) continue;
         id = id * A + symbols[p + n - 1];
         const t = offset + id;
-        const c = totals[t];
-        if (c < 2) {
+        // logCount is 0 for a block seen once (log 2 > 0 otherwise): one table read instead of two.
+        const logc = logCount[t];
+        if (logc === 0) {
           ids[k] = -1;
           continue;
         }
         ids[k] = id;
-        const logc = logCount[t];
         const batchP = (p >>> batchShift) << 2;
         acc[batchP + 3] += logc;
         const q = next[t];
@@ -241,7 +241,7 @@ export function scanPrefixLevels(task: PrefixLevelsTask): PrefixLevelsResult {
         if (q < 0) {
           if (sampled) {
             paths[(p >>> strideShift) * maxN + n - 1] = -(N - n - p + 1);
-            pathCounts[(p >>> strideShift) * maxN + n - 1] = c;
+            pathCounts[(p >>> strideShift) * maxN + n - 1] = totals[t];
           }
           continue;
         }
@@ -280,7 +280,7 @@ export function scanPrefixLevels(task: PrefixLevelsTask): PrefixLevelsResult {
         if (q >= matchWindow && q < matchEnd && R <= matchWindow) matchCount++;
         if (sampled) {
           paths[(p >>> strideShift) * maxN + n - 1] = R;
-          pathCounts[(p >>> strideShift) * maxN + n - 1] = c;
+          pathCounts[(p >>> strideShift) * maxN + n - 1] = totals[t];
         }
       }
       s.forwardObserved += forwardObserved;

@@ -71,19 +71,19 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
   const pathCounts = new Float64Array(sampleCount * maxN);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
-  let entries = 0;
-  for (let i = 2; i < task.slices.length; i += 4) entries += task.slices[i];
-  let order: Int32Array = new Int32Array(entries);
-  let next: Int32Array = new Int32Array(entries);
+  const entries = entriesOf({ kind: 'group', task });
+  const held = heldBuffers(entries, packed);
+  let order: Int32Array = held.order;
+  let next: Int32Array = held.next;
   // Carried words as in scanReturns, refreshed at multiples of perWord from the shared array.
-  let words: Uint16Array = new Uint16Array(packed ? entries : 0);
-  let nextWords: Uint16Array = new Uint16Array(packed ? entries : 0);
+  let words: Uint16Array = held.words;
+  let nextWords: Uint16Array = held.nextWords;
   gatherSlices(task.pieces, task.pieceWords, task.slices, order, words);
   const wordsGiven = task.pieceWords.some((w) => w.length > 0);
-  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, order.length);
+  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, entries);
   const sums: LevelSums[] = [];
   const active: number[] = [];
-  let activeLength = order.length;
+  let activeLength = entries;
   for (let n = firstN; n <= maxN; n++) {
     const level = emptySums(bins, batchCount);
     if (activeLength > 0) {
@@ -101,6 +101,28 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
     active.push(activeLength);
   }
   return { sums, active, paths, pathCounts };
+}
+
+/** A thread's working arrays of its last group, kept for the next one (see heldBuffers). */
+let held: { order: Int32Array; next: Int32Array; words: Uint16Array; nextWords: Uint16Array } | null = null;
+
+/**
+ * Working arrays for a group of `entries` positions: views of the ones this thread used for its
+ * previous group when they are large enough. A thread runs its groups one after another, and fresh
+ * memory costs a page fault per page on first touch (about 3 ms per MB on this machine, measured),
+ * which a thread taking several groups would pay for each.
+ */
+function heldBuffers(entries: number, packed: boolean): { order: Int32Array; next: Int32Array; words: Uint16Array; nextWords: Uint16Array } {
+  const wordEntries = packed ? entries : 0;
+  if (held === null || held.order.length < entries || held.words.length < wordEntries) {
+    held = { order: new Int32Array(entries), next: new Int32Array(entries), words: new Uint16Array(wordEntries), nextWords: new Uint16Array(wordEntries) };
+  }
+  return {
+    order: held.order.subarray(0, entries),
+    next: held.next.subarray(0, entries),
+    words: held.words.subarray(0, wordEntries),
+    nextWords: held.nextWords.subarray(0, wordEntries),
+  };
 }
 
 /**
@@ -295,6 +317,8 @@ export async function scanReturnsSplit(
     }
   }
   if (jobs !== null) {
+    // Largest first: a thread's first group then sizes the arrays it keeps for the rest (heldBuffers).
+    jobs.sort((a, b) => entriesOf(b) - entriesOf(a));
     const results = (await run(jobs)) as ScanGroupResult[];
     results.forEach(mergePaths);
     for (let j = 0; n <= maxN; n++, j++) {
@@ -316,6 +340,13 @@ export async function scanReturnsSplit(
     exhausted: firstEmpty < maxN,
     captured: null,
   };
+}
+
+function entriesOf(job: ScanJob): number {
+  if (job.kind !== 'group') return 0;
+  let entries = 0;
+  for (let i = 2; i < job.task.slices.length; i += 4) entries += job.task.slices[i];
+  return entries;
 }
 
 function largestOf(values: Int32Array): number {
