@@ -93,7 +93,8 @@ for (const c of CASES) {
     const all = (ts: Timing[]): string => ts.map((t) => t.analysisSeconds.toFixed(2)).join(', ');
     console.log(`  all runs: 1 thread ${all(ones)} s; 2 threads ${all(twos)} s`);
     console.log(`  two 1-thread runs at once: the slower took ${pairs.map((x) => x.toFixed(2)).join(', ')} s, so this machine lets 2 threads reach at most ${(100 * ceiling).toFixed(0)}%; reached ${(100 * efficiency / ceiling).toFixed(0)}% of that`);
-    console.log(`  2 threads: estimate ${mb(two.estimatedPeakBytes)} MB, peak ${mb(two.peakRssBytes)} MB`);
+    const ratio2 = two.estimatedPeakBytes / two.peakRssBytes;
+    console.log(`  2 threads: estimate ${mb(two.estimatedPeakBytes)} MB, peak ${mb(two.peakRssBytes)} MB, estimate/peak ${ratio2.toFixed(2)}${Math.abs(ratio2 - 1) <= 0.2 ? ' ok' : ' MISSED'}`);
   }
 }
 

@@ -121,7 +121,7 @@ async function analyzeOnWorkers(
   shared.set(symbols);
   const pool = jobPool(Array.from({ length: cores }, subWorkerPort));
   try {
-    return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks);
+    return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks, pool.close);
   } finally {
     pool.close();
   }

@@ -88,7 +88,7 @@ export async function analyzeOnThreads(
 ): Promise<AnalysisResult> {
   const pool = startScanThreads(threads);
   try {
-    return await analyzeSequenceSplit({ ...sequence, symbols: sharedSymbols(sequence.symbols) }, input, settings, threads, pool.run, hooks);
+    return await analyzeSequenceSplit({ ...sequence, symbols: sharedSymbols(sequence.symbols) }, input, settings, threads, pool.run, hooks, pool.close);
   } finally {
     pool.close();
   }

@@ -7,6 +7,8 @@ import type { Sequence } from './sequence/sequence';
 /**
  * analyzeSequence with the scan shared among `groups` threads (scanReturnsSplit); `run` decides
  * where its jobs run (worker threads in hosts, this process in tests).
+ * @param afterScan called once the scan is done, before the estimates: hosts end their threads
+ *   there, so that the threads' memory is free for the rest of the analysis
  * @throws RangeError for invalid settings; ScanCancelled when hooks.shouldStop returns true
  */
 export async function analyzeSequenceSplit(
@@ -16,8 +18,10 @@ export async function analyzeSequenceSplit(
   groups: number,
   run: ScanRunner,
   hooks: AnalysisHooks = {},
+  afterScan?: () => void,
 ): Promise<AnalysisResult> {
   validateSettings(settings, sequence.symbols.length);
   const scan = await scanReturnsSplit(sequence.symbols, sequence.alphabet.length, scanOptionsOf(settings, hooks), groups, run);
+  afterScan?.();
   return analyzeScannedSequence(sequence, scan, input, settings, hooks);
 }

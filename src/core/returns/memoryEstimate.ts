@@ -63,12 +63,16 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const threads = input.threads ?? 1;
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be a whole number >= 1; got ${threads}`);
   const scanned = Math.min(N, input.chunkSize ?? N);
-  // Threads: the symbols are copied once into shared memory, and at the split the groups' slices of
-  // the order and word arrays are made while the whole-sequence arrays still exist (at most twice
-  // the engine's arrays for a moment); after it the groups hold no more than one scan did.
-  const split = threads > 1 ? 2 : 1;
-  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * split;
-  const engineBytes = scanned * engineBytesPerPosition(alphabetSize) * split;
+  // Threads (splitScan.ts): the symbols are copied once into shared memory; the range passes leave
+  // the carried words of every position and each range's layout of the positions in play (positions
+  // and words) in shared memory until the scan ends; each thread then keeps the working arrays of its
+  // largest class group. With no class above 1/threads of the positions, those hold between a quarter
+  // of one scan's arrays (even classes, a fair coin) and all of them; half is taken, which measured
+  // within 15% of the peak for a fair coin and an uneven Markov chain (DEVELOPERS.md, Scale).
+  const split = threads > 1;
+  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (split ? 2 : 1);
+  const wordBytes = alphabetSize <= 0x100 ? 2 : 0;
+  const engineBytes = split ? scanned * (wordBytes + 4 + wordBytes + engineBytesPerPosition(alphabetSize) / 2) : scanned * engineBytesPerPosition(alphabetSize);
   const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
   const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
   const pathBytes = 256 * maxN * 16;
