@@ -5,14 +5,16 @@
 // page's own clock measures from the click to the moment the summary shows this file's name and
 // estimate, and a PerformanceObserver for long tasks counts main-thread tasks over 50 ms in that
 // window. Sizes default to 1e6, 1e7; BENCH_BROWSER_SIZES=1e6 limits them; BENCH_BROWSER=0 skips
-// the whole part (`npm run bench` runs it after the command-line bench). Requests to any other
-// origin are blocked and listed. The worker's memory is not measured: the page is not
-// cross-origin isolated, so performance.measureUserAgentSpecificMemory is unavailable.
-import { writeFileSync } from 'node:fs';
+// the whole part (`npm run bench` runs it after the command-line bench); BENCH_BROWSER_SIZES=1e8
+// runs the largest size the page takes (not by default: about a minute and a 100 MB file). Requests
+// to any other origin are blocked and listed. Peak memory: the highest resident size (VmHWM) of the
+// page's renderer process, which holds the analysis worker and its sub-workers, read from /proc
+// (the renderer's process id from the browser's SystemInfo.getProcessInfo).
+import { readFileSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
 import { basename, dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium } from '@playwright/test';
+import { chromium, type Browser } from '@playwright/test';
 import { build, preview } from 'vite';
 import { benchFile } from './benchFiles';
 
@@ -97,6 +99,26 @@ const PROBES = `
 })();
 `;
 
+/** The highest resident size of the browser's renderer processes so far (bytes; 0 if unreadable). */
+async function rendererPeakBytes(browser: Browser): Promise<number> {
+  const session = await browser.newBrowserCDPSession();
+  try {
+    const { processInfo } = (await session.send('SystemInfo.getProcessInfo')) as { processInfo: { type: string; id: number }[] };
+    let peak = 0;
+    for (const p of processInfo.filter((q) => q.type === 'renderer')) {
+      try {
+        const hwm = /VmHWM:\s+(\d+) kB/.exec(readFileSync(`/proc/${p.id}/status`, 'utf8'));
+        if (hwm !== null) peak = Math.max(peak, Number(hwm[1]) * 1024);
+      } catch {
+        // the process ended meanwhile
+      }
+    }
+    return peak;
+  } finally {
+    await session.detach();
+  }
+}
+
 interface LongTask {
   start: number;
   duration: number;
@@ -136,7 +158,8 @@ async function main(): Promise<void> {
       await page.addInitScript({ content: PROBES });
       await page.goto(`${origin}/`);
       // The first visit runs the default demo; wait for it so its result is not mistaken for ours.
-      await page.waitForFunction(`document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null`, null, {
+      // Predicates are functions, not strings: the page's content security policy forbids eval.
+      await page.waitForFunction(() => document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null, null, {
         timeout: 60_000,
       });
       const name = basename(file);
@@ -153,25 +176,26 @@ async function main(): Promise<void> {
       }
       await page.getByRole('button', { name: 'Run', exact: true }).click();
       try {
-        await page.waitForFunction('globalThis.__bench.doneAt !== null', null, {
+        await page.waitForFunction(() => (globalThis as unknown as { __bench: { doneAt: number | null } }).__bench.doneAt !== null, null, {
           timeout: Number(process.env.BENCH_BROWSER_TIMEOUT_MS ?? 180_000),
           polling: 200,
         });
       } catch (error) {
-        const state: unknown = await page.evaluate(`({
-          probe: globalThis.__bench,
+        const state: unknown = await page.evaluate(() => ({
+          probe: (globalThis as unknown as { __bench: unknown }).__bench,
           name: document.querySelector('.input-name')?.textContent,
           status: document.querySelector('[role="status"]')?.textContent,
-        })`);
+        }));
         throw new Error(`no estimate for ${name} (${JSON.stringify(state).slice(0, 2000)})`, { cause: error });
       }
-      await page.waitForFunction(`performance.now() > globalThis.__bench.doneAt + ${SETTLE_MS}`, null, { polling: 100 });
+      await page.waitForFunction((settle) => performance.now() > (globalThis as unknown as { __bench: { doneAt: number } }).__bench.doneAt + settle, SETTLE_MS, { polling: 100 });
       if (cdp !== null) {
         const { profile } = (await cdp.send('Profiler.stop')) as unknown as { profile: Profile };
         if (process.env.BENCH_BROWSER_PROFILE_FILE !== undefined) writeFileSync(`${process.env.BENCH_BROWSER_PROFILE_FILE}-${N}.cpuprofile`, JSON.stringify(profile));
         process.stdout.write(`    main thread, heaviest functions (self time), ${N}:\n${heaviest(profile, 25).map((l) => `      ${l}`).join('\n')}\n`);
       }
       const probe = await page.evaluate(() => (globalThis as unknown as { __bench: { clickAt: number; doneAt: number; longTasks: LongTask[] } }).__bench);
+      const peakMb = (await rendererPeakBytes(browser)) / 1e6;
       const seconds = (probe.doneAt - probe.clickAt) / 1000;
       const during = probe.longTasks.filter((t) => t.start + t.duration >= probe.clickAt && t.start <= probe.doneAt + SETTLE_MS);
       const over = during.filter((t) => t.duration > LONG_TASK_MS);
@@ -184,7 +208,7 @@ async function main(): Promise<void> {
       ]
         .filter(Boolean)
         .join(', ');
-      rows.push([N.toExponential(0), seconds.toFixed(2), target === undefined ? '' : `${target}`, String(over.length), longest.toFixed(0), verdict]);
+      rows.push([N.toExponential(0), seconds.toFixed(2), target === undefined ? '' : `${target}`, String(over.length), longest.toFixed(0), peakMb.toFixed(0), verdict]);
       process.stdout.write(`  ${rows[rows.length - 1]!.join(' | ')}\n`);
       if (process.env.BENCH_BROWSER_VERBOSE === '1') for (const t of over) process.stdout.write(`    long task at +${(t.start - probe.clickAt).toFixed(0)} ms: ${t.duration.toFixed(0)} ms\n`);
       await context.close();
@@ -194,12 +218,12 @@ async function main(): Promise<void> {
     await new Promise<void>((done) => server.httpServer.close(() => done()));
   }
 
-  const header = ['N', 'seconds to estimate', 'target s', `long tasks > ${LONG_TASK_MS} ms`, 'longest task ms', 'verdict'];
+  const header = ['N', 'seconds to estimate', 'target s', `long tasks > ${LONG_TASK_MS} ms`, 'longest task ms', 'renderer peak MB', 'verdict'];
   const widths = header.map((h, i) => Math.max(h.length, ...rows.map((r) => (r[i] ?? '').length)));
   console.log(`\nworkbench in chromium (built page, vite preview), fair-coin file picked and run, from the click on Run to the estimate shown; long tasks until ${SETTLE_MS / 1000} s after it`);
   for (const r of [header, ...rows]) console.log(r.map((cell, i) => (cell ?? '').padEnd(widths[i]!)).join('  '));
   console.log(`requests to other origins: ${blocked.length === 0 ? 'none' : `${blocked.length} blocked (${[...new Set(blocked)].join(', ')})`}`);
-  const missed = rows.filter((r) => r[5]!.includes('MISSED')).length;
+  const missed = rows.filter((r) => r[6]!.includes('MISSED')).length;
   console.log(missed === 0 ? 'browser bench: every target met' : `browser bench: ${missed} of ${rows.length} sizes missed a target`);
 }
 
