@@ -8,27 +8,27 @@ import { collectErrors, screenshot } from './pageWatch';
 // Invented chain parameters for the generated file; no value of this file is a check value.
 const STAY: [number, number] = [0.8, 0.7];
 
-test('the page is cross-origin isolated and a file of a million symbols is analysed on sub-workers', async ({ page }) => {
+test('the page is cross-origin isolated and a file of five million symbols is analysed on sub-workers', async ({ page }) => {
   const errors = collectErrors(page);
   const subWorkers: string[] = [];
   page.on('worker', (worker) => {
     if (worker.url().includes('scanJob')) subWorkers.push(worker.url());
   });
-  const path = join(mkdtempSync(join(tmpdir(), 'returnrate-threads-')), 'million.txt');
-  writeFileSync(path, twoStateChainText(1_050_000, STAY, 5));
+  const path = join(mkdtempSync(join(tmpdir(), 'returnrate-threads-')), 'five-million.txt');
+  writeFileSync(path, twoStateChainText(5_050_000, STAY, 5));
   await page.goto('/');
   await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 60_000 });
   expect(await page.evaluate(() => self.crossOriginIsolated)).toBe(true);
   expect(await page.evaluate(() => navigator.hardwareConcurrency)).toBeGreaterThan(1);
   await page.getByLabel('Choose a sequence file').setInputFiles(path);
   await page.getByRole('button', { name: 'Run', exact: true }).click();
-  await expect(page.locator('.input-name')).toHaveText('million.txt', { timeout: 110_000 });
+  await expect(page.locator('.input-name')).toHaveText('five-million.txt', { timeout: 110_000 });
   await expect(page.getByTestId('run-status')).toHaveText('Idle', { timeout: 110_000 });
   await expect(page.getByTestId('entropy-interval')).toContainText(/interval: -?\d+\.\d+ to -?\d+\.\d+/);
   // The one-worker note appears only when the page is not isolated.
   await expect(page.getByText('not cross-origin isolated')).toHaveCount(0);
   // Nested workers are reported by chromium with their script's URL.
   expect(subWorkers.length).toBeGreaterThan(1);
-  await screenshot(page, 'threads-1-million');
+  await screenshot(page, 'threads-5-million');
   expect(errors).toEqual([]);
 });

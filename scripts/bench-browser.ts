@@ -119,6 +119,11 @@ async function rendererPeakBytes(browser: Browser): Promise<number> {
   }
 }
 
+/** The page's document as the predicates below read it (the scripts compile without the DOM types). */
+interface PageDocument {
+  querySelector(selector: string): { textContent: string | null } | null;
+}
+
 interface LongTask {
   start: number;
   duration: number;
@@ -159,7 +164,10 @@ async function main(): Promise<void> {
       await page.goto(`${origin}/`);
       // The first visit runs the default demo; wait for it so its result is not mistaken for ours.
       // Predicates are functions, not strings: the page's content security policy forbids eval.
-      await page.waitForFunction(() => document.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && document.querySelector('.input-name') !== null, null, {
+      await page.waitForFunction(() => {
+        const d = (globalThis as unknown as { document: PageDocument }).document;
+        return d.querySelector('[data-testid="run-status"]')?.textContent === 'Idle' && d.querySelector('.input-name') !== null;
+      }, null, {
         timeout: 60_000,
       });
       const name = basename(file);
@@ -181,11 +189,14 @@ async function main(): Promise<void> {
           polling: 200,
         });
       } catch (error) {
-        const state: unknown = await page.evaluate(() => ({
-          probe: (globalThis as unknown as { __bench: unknown }).__bench,
-          name: document.querySelector('.input-name')?.textContent,
-          status: document.querySelector('[role="status"]')?.textContent,
-        }));
+        const state: unknown = await page.evaluate(() => {
+          const d = (globalThis as unknown as { document: PageDocument }).document;
+          return {
+            probe: (globalThis as unknown as { __bench: unknown }).__bench,
+            name: d.querySelector('.input-name')?.textContent,
+            status: d.querySelector('[role="status"]')?.textContent,
+          };
+        });
         throw new Error(`no estimate for ${name} (${JSON.stringify(state).slice(0, 2000)})`, { cause: error });
       }
       await page.waitForFunction((settle) => performance.now() > (globalThis as unknown as { __bench: { doneAt: number } }).__bench.doneAt + settle, SETTLE_MS, { polling: 100 });

@@ -1,5 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
+import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPort, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
@@ -79,8 +79,6 @@ function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
   pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN });
 }
 
-/** From this many symbols on, a cross-origin isolated page shares the scan among sub-workers. */
-const SPLIT_FROM_SYMBOLS = 1_000_000;
 
 /** One sub-worker as the job pool sees it; it ends with the scan (or with this worker). */
 function subWorkerPort(): JobPort {
@@ -98,7 +96,7 @@ function subWorkerPort(): JobPort {
 /**
  * The analysis on one worker, or shared among navigator.hardwareConcurrency sub-workers when the
  * page is cross-origin isolated (SharedArrayBuffer needs it: COOP/COEP headers, vite.config.ts) and
- * the sequence has at least 10^6 symbols. Without isolation a note says why one worker ran.
+ * the sequence has at least SHARE_FROM_SYMBOLS symbols. Without isolation a note says why one worker ran.
  */
 async function analyzeOnWorkers(
   sequence: Sequence,
@@ -107,7 +105,7 @@ async function analyzeOnWorkers(
   hooks: AnalysisHooks,
 ): Promise<AnalysisResult> {
   const cores = navigator.hardwareConcurrency || 1;
-  if (cores < 2 || sequence.symbols.length < SPLIT_FROM_SYMBOLS) return analyzeSequence(sequence, input, settings, hooks);
+  if (cores < 2 || sequence.symbols.length < SHARE_FROM_SYMBOLS) return analyzeSequence(sequence, input, settings, hooks);
   if (!self.crossOriginIsolated) {
     const result = analyzeSequence(sequence, input, settings, hooks);
     const note = {

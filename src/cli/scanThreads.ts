@@ -1,21 +1,18 @@
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { analyzeSequenceSplit, jobPool, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence, type SymbolArray } from '../core';
+import { analyzeSequenceSplit, jobPool, SHARE_FROM_SYMBOLS, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence, type SymbolArray } from '../core';
 import { isPositiveInteger, numberOption } from './options';
 
 type Values = Record<string, string | boolean | undefined>;
 
-/** Below this many symbols the default is one thread: starting workers would cost more than they save. */
-const THREADS_FROM_SYMBOLS = 1_000_000;
-
 /**
- * --threads W, or by default os.availableParallelism() for inputs of at least a million symbols
- * (one thread below).
+ * --threads W, or by default os.availableParallelism() for inputs of at least SHARE_FROM_SYMBOLS
+ * symbols (one thread below: starting workers would cost about what they save).
  */
 export function threadsOption(values: Values, symbols: number): number {
   const given = numberOption(values, 'threads', isPositiveInteger, 'a whole number of at least 1');
   if (given !== undefined) return given;
-  return symbols >= THREADS_FROM_SYMBOLS ? availableParallelism() : 1;
+  return symbols >= SHARE_FROM_SYMBOLS ? availableParallelism() : 1;
 }
 
 /** The sources run through tsx (tests, `npm run returnrate`); the bundle has a built worker beside it. */

@@ -152,7 +152,7 @@ export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeC
 export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
 export { pageMemoryCheck, PAGE_MEMORY_BUDGET_BYTES } from './returns/pageMemoryCheck';
 export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';
-export { scanReturnsSplit, scanGroup, classRuns, assignClasses } from './returns/splitScan';
+export { scanReturnsSplit, scanGroup, classRuns, assignClasses, SHARE_FROM_SYMBOLS } from './returns/splitScan';
 export type { ScanGroupTask, ScanGroupResult } from './returns/splitScan';
 export { runScanJob, inThisThread, jobTransfers, resultTransfers } from './returns/scanJobs';
 export type { ScanJob, ScanJobResult, ScanRunner } from './returns/scanJobs';

@@ -1,6 +1,7 @@
 import { allocateSymbols, type SymbolArray } from '../sequence/sequence';
 import { collectReturns, type LevelSums, type ReturnGeometry } from './collectReturns';
 import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
+import { wordLayout } from './packedWords';
 import { partitionBinaryLevel } from './partitionBinaryLevel';
 import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
@@ -90,9 +91,7 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   // refreshed from the sequence once every perWord levels. This turns the random read of
   // x[p + n - 1] (the dominant cost once classes are scattered over the sequence) into a sequential
   // read of the carried word on all other levels.
-  const bits = Math.max(1, Math.ceil(Math.log2(alphabetSize)));
-  const perWord = bits <= 8 ? Math.floor(16 / bits) : 1;
-  const packed = perWord > 1;
+  const { bits, perWord, packed } = wordLayout(alphabetSize);
   const binary = alphabetSize === 2;
   let words = new Uint16Array(packed ? N : 0);
   let nextWords = new Uint16Array(packed ? N : 0);
