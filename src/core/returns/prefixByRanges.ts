@@ -1,19 +1,9 @@
 import type { SymbolArray } from '../sequence/sequence';
 import { addSums } from './addReturnSums';
 import type { LevelSums } from './collectReturns';
-import { prefixClassSums, prefixDepths, prefixTable, type PrefixCountResult, type PrefixTable, type PrefixCountTask, type PrefixLevelsResult } from './prefixLevels';
+import { prefixClassSums, prefixDepths, prefixTable, type PrefixCountResult, type PrefixTable, type ScanLayout, type PrefixCountTask, type PrefixLevelsResult } from './prefixLevels';
 import { wordLayout } from './packedWords';
 import type { ScanJob, ScanRunner } from './scanJobs';
-
-/** Fixed parameters of the scan that the range passes share with the class refinement. */
-export interface ScanLayout {
-  readonly batchLength: number;
-  readonly batchCount: number;
-  readonly stride: number;
-  readonly matchWindow: number;
-  readonly maxN: number;
-  readonly bins: number;
-}
 
 export interface PrefixOutcome {
   /** Levels done by the range passes. */

@@ -130,20 +130,24 @@ export function countPrefixes(task: PrefixCountTask): PrefixCountResult {
   return { counts, first };
 }
 
-/** What pass 2 of one range needs besides pass 1's answers. */
-export interface PrefixLevelsTask extends PrefixCountTask {
-  /** Counts over the whole sequence (sum of every range's). */
-  readonly totals: Int32Array;
-  /** This range's own counts (pass 1), for laying out its positions. */
-  readonly counts: Int32Array;
-  /** First occurrence of each block after this range (-1: none). */
-  readonly after: Int32Array;
+/** Fixed parameters of the scan that the range passes share with the class refinement. */
+export interface ScanLayout {
   readonly batchLength: number;
   readonly batchCount: number;
   readonly stride: number;
   readonly matchWindow: number;
   readonly maxN: number;
   readonly bins: number;
+}
+
+/** What pass 2 of one range needs besides pass 1's answers. */
+export interface PrefixLevelsTask extends PrefixCountTask, ScanLayout {
+  /** Counts over the whole sequence (sum of every range's). */
+  readonly totals: Int32Array;
+  /** This range's own counts (pass 1), for laying out its positions. */
+  readonly counts: Int32Array;
+  /** First occurrence of each block after this range (-1: none). */
+  readonly after: Int32Array;
   /** Offset of the carried words laid out beside the positions (the refinement's next refresh). */
   readonly wordOffset: number;
 }
