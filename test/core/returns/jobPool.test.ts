@@ -24,7 +24,8 @@ const countJob = (start: number, end: number): ScanJob => ({
 
 describe('jobPool', () => {
   it('gives each free worker the next job and returns results in job order', async () => {
-    const [fast, slow]: number[][] = [[], []];
+    const fast: number[] = [];
+    const slow: number[] = [];
     const pool = jobPool([fakePort(1, fast), fakePort(40, slow)]);
     const jobs = [countJob(0, 1), countJob(1, 2), countJob(2, 3), countJob(3, 4), countJob(4, 5)];
     const results = await pool.run(jobs);

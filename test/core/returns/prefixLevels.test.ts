@@ -14,14 +14,14 @@ describe('range passes: counts and carried words', () => {
         const [start, end] = [u % (N + 1), v % (N + 1)].sort((p, q) => p - q) as [number, number];
         const got = countPrefixes({ symbols: x, alphabetSize: a, depth, start, end, words: new Uint16Array(0) });
         const { offsets } = prefixTable(a, depth);
-        const counts = new Int32Array(offsets[depth]);
-        const first = new Int32Array(offsets[depth]).fill(-1);
+        const counts = new Int32Array(offsets[depth]!);
+        const first = new Int32Array(offsets[depth]!).fill(-1);
         for (let n = 1; n <= depth; n++) {
           for (let p = start; p < end && p + n <= N; p++) {
             let id = 0;
             for (let j = 0; j < n; j++) id = id * a + x[p + j]!;
             const t = offsets[n - 1]! + id;
-            if (counts[t]++ === 0) first[t] = p;
+            if (counts[t]!++ === 0) first[t] = p;
           }
         }
         expect(Array.from(got.counts)).toEqual(Array.from(counts));
