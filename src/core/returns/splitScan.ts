@@ -204,7 +204,7 @@ export function assignClasses(sizes: ArrayLike<number>, groups: number): number[
  * shares are added per level. Return times and every count are exactly those of scanReturns; sums
  * of logarithms agree to rounding (the same terms, added in another grouping). Levels are reported
  * through onLevel after each shared step, in order.
- * @param classesPerGroup classes per group wanted before sharing (default 64; tests share earlier)
+ * @param classesPerGroup classes per group wanted before sharing (default 16; tests share earlier)
  * @throws RangeError as scanReturns, and for captureLevel (not supported here)
  */
 export async function scanReturnsSplit(
@@ -323,6 +323,8 @@ export async function scanReturnsSplit(
   if (jobs !== null) {
     // Largest first: a thread's first group then sizes the arrays it keeps for the rest (heldBuffers).
     jobs.sort((a, b) => entriesOf(b) - entriesOf(a));
+    // Jobs on other threads cannot poll shouldStop; a host that cancels ends its threads instead.
+    if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
     const results = (await run(jobs)) as ScanGroupResult[];
     results.forEach(mergePaths);
     for (let j = 0; n <= maxN; n++, j++) {
