@@ -74,9 +74,17 @@ function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: S
   return { sequence: longest.sequence, warnings: [...read.warnings, { code: 'segment-analysed', message }] };
 }
 
-/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget (core: pageMemoryCheck). */
+/** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget (core:
+ * pageMemoryCheck), counting the sub-workers when the scan will be shared (scanThreads). */
 function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
-  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN });
+  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN, threads: scanThreads(sequence) });
+}
+
+/** Sub-workers the scan of this sequence runs on: one per core when the page is cross-origin
+ * isolated and the sequence has at least SHARE_FROM_SYMBOLS symbols, else 1 (this worker). */
+function scanThreads(sequence: Sequence): number {
+  const cores = navigator.hardwareConcurrency || 1;
+  return cores >= 2 && self.crossOriginIsolated && sequence.symbols.length >= SHARE_FROM_SYMBOLS ? cores : 1;
 }
 
 
