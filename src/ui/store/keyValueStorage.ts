@@ -42,10 +42,6 @@ export function keyValueStorage(store: KeyValueStore, legacy: StateStorage | nul
     },
     async setItem(name, value) {
       if (broken) return quietly(() => legacy?.setItem(name, value));
-      // The store's write copies the whole saved state (a result is a few MB) inside the call; in a
-      // task of its own it no longer lengthens the state update that asked for it (measured: a
-      // 36 ms copy made the page's last update of a run a task over 50 ms). Writes keep their order.
-      await nextTask();
       try {
         await store.set(name, value);
       } catch {
@@ -67,8 +63,4 @@ export function keyValueStorage(store: KeyValueStore, legacy: StateStorage | nul
       }
     },
   };
-}
-
-function nextTask(): Promise<void> {
-  return new Promise((resolve) => setTimeout(resolve, 0));
 }

@@ -63,7 +63,6 @@ describe('app store on an async storage (IndexedDB in the page)', () => {
     await new Promise<void>((resolve) => whenHydrated(resolve, store));
     const actions = bindActions(store);
     const id = actions.beginRun('x', 40);
-    await settle(); // writes go out a task later (keyValueStorage)
     const afterBegin = writes.length;
     actions.reportProgress(id, { kind: 'level', n: 1, active: 1000 });
     actions.reportProgress(id, { kind: 'level', n: 2, active: 800 });
