@@ -4,6 +4,7 @@ import type { LevelSums } from './collectReturns';
 import { prefixClassSums, prefixDepths, prefixTable, type PrefixCountResult, type PrefixTable, type ScanLayout, type PrefixCountTask, type PrefixLevelsResult } from './prefixLevels';
 import { wordLayout } from './packedWords';
 import type { ScanJob, ScanRunner } from './scanJobs';
+import { mergeWrittenPaths } from './scanReturns';
 
 export interface PrefixOutcome {
   /** Levels done by the range passes. */
@@ -97,14 +98,7 @@ export async function prefixByRanges(
     active.push(classes.active);
   }
   const { paths, pathCounts } = scanned[0];
-  for (const s of scanned.slice(1)) {
-    for (let k = 0; k < paths.length; k++) {
-      if (!Number.isNaN(s.paths[k])) {
-        paths[k] = s.paths[k];
-        pathCounts[k] = s.pathCounts[k];
-      }
-    }
-  }
+  for (const s of scanned.slice(1)) mergeWrittenPaths({ paths, pathCounts }, s);
   const pieces = scanned.map((s) => s.laidOut);
   const pieceWords = scanned.map((s) => s.laidWords);
   return { depth, sums, active, pieces, pieceWords, classSizes, sliceStarts, sliceLengths, paths, pathCounts };

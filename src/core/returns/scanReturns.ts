@@ -212,6 +212,22 @@ export function emptySums(bins: number, batchCount: number): LevelSums {
   };
 }
 
+/** Sampled paths written by one share of a shared scan (NaN where it wrote nothing), copied into
+ * `into`: the shares write disjoint entries, so merging is taking what each wrote. */
+export interface WrittenPaths {
+  readonly paths: Float64Array;
+  readonly pathCounts: Float64Array;
+}
+
+export function mergeWrittenPaths(into: WrittenPaths, from: WrittenPaths): void {
+  for (let k = 0; k < into.paths.length; k++) {
+    if (!Number.isNaN(from.paths[k])) {
+      into.paths[k] = from.paths[k];
+      into.pathCounts[k] = from.pathCounts[k];
+    }
+  }
+}
+
 /** Entries never reached were unique blocks (censored, count 1) or lie past the end (0). */
 export function completePaths(
   paths: Float64Array,

@@ -9,7 +9,7 @@ import { assembleOrder, classSlices, gatherSlices, prefixByRanges } from './pref
 import { sharedBuffer } from './sharedBuffer';
 import type { ScanJob, ScanRunner } from './scanJobs';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
-import { completePaths, emptySums, levelFromSums, scanReturns, type ScanOptions } from './scanReturns';
+import { completePaths, emptySums, levelFromSums, mergeWrittenPaths, scanReturns, type ScanOptions, type WrittenPaths } from './scanReturns';
 
 /**
  * The classes of one share of the work after the split, and what is needed to refine them alone.
@@ -69,48 +69,80 @@ const JOBS_PER_GROUP = 4;
 export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): ScanGroupResult {
   const { symbols, alphabetSize, firstN, maxN, batchLength, batchCount, stride, matchWindow, words: allWords } = task;
   const N = symbols.length;
-  const { bits, perWord, packed } = wordLayout(alphabetSize);
-  const binary = alphabetSize === 2;
+  const { bits, packed } = wordLayout(alphabetSize);
   const bins = histogramBinCount(N);
   const sampleCount = Math.ceil(N / stride);
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
   const pathCounts = new Float64Array(sampleCount * maxN);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
-  const entries = entriesOf({ kind: 'group', task });
-  const held = heldBuffers(entries, packed);
-  let order: Int32Array = held.order;
-  let next: Int32Array = held.next;
-  // Carried words as in scanReturns, refreshed at multiples of perWord from the shared array.
-  let words: Uint16Array = held.words;
-  let nextWords: Uint16Array = held.nextWords;
-  gatherSlices(task.pieces, task.pieceWords, task.slices, order, words);
-  const wordsGiven = task.pieceWords.some((w) => w.length > 0);
-  const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, entries);
+  const entries = sliceEntries(task.slices);
+  const arrays = heldBuffers(entries, packed);
+  gatherSlices(task.pieces, task.pieceWords, task.slices, arrays.order, arrays.words);
+  // Carried words as in scanReturns, refreshed at multiples of perWord from the shared array, and
+  // at firstN too unless the slices brought them.
+  const r: Refinement = { ...arrays, active: entries, wordsLoaded: task.pieceWords.some((w) => w.length > 0) };
+  const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, bits, packed, entries), sample, geometry, shouldStop };
   const sums: LevelSums[] = [];
   const active: number[] = [];
-  let activeLength = entries;
   for (let n = firstN; n <= maxN; n++) {
     const level = emptySums(bins, batchCount);
-    if (activeLength > 0) {
+    if (r.active > 0) {
       if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-      const wordShift = ((n - 1) % perWord) * bits;
-      if (packed && (wordShift === 0 || (n === firstN && !wordsGiven))) gatherWords(allWords, n - 1 - ((n - 1) % perWord), order, activeLength, words);
-      const partition = binary ? partitionBinaryLevel : partitionLevel;
-      const split = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
-      collectReturns(next, split.active, n, geometry, sample, null, level);
-      activeLength = split.active;
-      [order, next] = [next, order];
-      [words, nextWords] = [nextWords, words];
+      refineLevel(r, n, context, level);
     }
     sums.push(level);
-    active.push(activeLength);
+    active.push(r.active);
   }
   return { sums, active, paths, pathCounts };
 }
 
+/** One class refinement between two levels: the entries in play and their carried words, and the
+ * spare arrays the next level is written to. */
+interface RefinementArrays {
+  order: Int32Array;
+  next: Int32Array;
+  words: Uint16Array;
+  nextWords: Uint16Array;
+}
+
+interface Refinement extends RefinementArrays {
+  active: number;
+  wordsLoaded: boolean;
+}
+
+/** What stays fixed across the levels of a refinement. */
+interface RefinementContext {
+  readonly alphabetSize: number;
+  /** The shared carried words at offset 0 of every position (packedWords.ts). */
+  readonly allWords: Uint16Array;
+  readonly buffers: RefinementBuffers;
+  readonly sample: SampleSink;
+  readonly geometry: ReturnGeometry;
+  readonly shouldStop: (() => boolean) | undefined;
+}
+
+/**
+ * Level n of a refinement, as one turn of scanReturns' loop: the carried words refreshed at
+ * multiples of perWord (or first of all, when none are loaded yet), every class split by its
+ * members' symbol at offset n - 1, the level's returns summed into `sums`, and the arrays swapped.
+ */
+function refineLevel(r: Refinement, n: number, context: RefinementContext, sums: LevelSums): void {
+  const { alphabetSize, allWords, buffers, sample, geometry, shouldStop } = context;
+  const { bits, perWord, packed } = wordLayout(alphabetSize);
+  const wordShift = ((n - 1) % perWord) * bits;
+  if (packed && (wordShift === 0 || !r.wordsLoaded)) gatherWords(allWords, n - 1 - ((n - 1) % perWord), r.order, r.active, r.words);
+  r.wordsLoaded = true;
+  const partition = alphabetSize === 2 ? partitionBinaryLevel : partitionLevel;
+  const outcome = partition(buffers, r.order, r.words, r.active, r.next, r.nextWords, n, wordShift, sample, shouldStop);
+  collectReturns(r.next, outcome.active, n, geometry, sample, null, sums);
+  r.active = outcome.active;
+  [r.order, r.next] = [r.next, r.order];
+  [r.words, r.nextWords] = [r.nextWords, r.words];
+}
+
 /** A thread's working arrays of its last group, kept for the next one (see heldBuffers). */
-let held: { order: Int32Array; next: Int32Array; words: Uint16Array; nextWords: Uint16Array } | null = null;
+let held: RefinementArrays | null = null;
 
 /**
  * Working arrays for a group of `entries` positions: views of the ones this thread used for its
@@ -118,7 +150,7 @@ let held: { order: Int32Array; next: Int32Array; words: Uint16Array; nextWords: 
  * memory costs a page fault per page on first touch (about 3 ms per MB on this machine, measured),
  * which a thread taking several groups would pay for each.
  */
-function heldBuffers(entries: number, packed: boolean): { order: Int32Array; next: Int32Array; words: Uint16Array; nextWords: Uint16Array } {
+function heldBuffers(entries: number, packed: boolean): RefinementArrays {
   const wordEntries = packed ? entries : 0;
   if (held === null || held.order.length < entries || held.words.length < wordEntries) {
     held = { order: new Int32Array(entries), next: new Int32Array(entries), words: new Uint16Array(wordEntries), nextWords: new Uint16Array(wordEntries) };
@@ -233,7 +265,7 @@ export async function scanReturnsSplit(
   const shouldStop = options.shouldStop;
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
   const pathCounts = new Float64Array(sampleCount * maxN);
-  const { bits, perWord, packed } = wordLayout(alphabetSize);
+  const { bits, packed } = wordLayout(alphabetSize);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
   const levels: LevelStats[] = [];
@@ -246,14 +278,7 @@ export async function scanReturnsSplit(
   };
   // Filled by the range passes; read by every later refresh of the carried words, in any thread.
   const allWords = new Uint16Array(packed ? sharedBuffer(2 * N) : new ArrayBuffer(0));
-  const mergePaths = (from: { paths: Float64Array; pathCounts: Float64Array }): void => {
-    for (let k = 0; k < paths.length; k++) {
-      if (!Number.isNaN(from.paths[k])) {
-        paths[k] = from.paths[k];
-        pathCounts[k] = from.pathCounts[k];
-      }
-    }
-  };
+  const mergePaths = (from: WrittenPaths): void => mergeWrittenPaths({ paths, pathCounts }, from);
   const wantedClasses = classesPerGroup * groups;
   const shareable = (classSizes: Int32Array, active: number, classes: number): boolean =>
     active > 0 && classes >= wantedClasses && largestOf(classSizes) * groups <= active;
@@ -274,29 +299,24 @@ export async function scanReturnsSplit(
   // This thread refines the classes further while they are too few or too uneven to share: the
   // order once they are (n is then the first level left), or null when maxN comes first.
   const refineUntilShareable = (start: Int32Array): Int32Array | null => {
-    let order: Int32Array = start;
-    let next: Int32Array = new Int32Array(activeLength);
-    let words: Uint16Array = new Uint16Array(packed ? activeLength : 0);
-    let nextWords: Uint16Array = new Uint16Array(packed ? activeLength : 0);
-    const buffers = refinementBuffers(symbols, alphabetSize, bits, packed, activeLength);
-    for (let loaded = false; n <= maxN; n++) {
+    const r: Refinement = {
+      order: start,
+      next: new Int32Array(activeLength),
+      words: new Uint16Array(packed ? activeLength : 0),
+      nextWords: new Uint16Array(packed ? activeLength : 0),
+      active: activeLength,
+      wordsLoaded: false,
+    };
+    const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, bits, packed, activeLength), sample, geometry, shouldStop };
+    for (; n <= maxN; n++) {
       if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
       const sums = emptySums(bins, batchCount);
-      if (activeLength > 0) {
-        const wordShift = ((n - 1) % perWord) * bits;
-        if (packed && (wordShift === 0 || !loaded)) gatherWords(allWords, n - 1 - ((n - 1) % perWord), order, activeLength, words);
-        loaded = true;
-        const partition = alphabetSize === 2 ? partitionBinaryLevel : partitionLevel;
-        const outcome = partition(buffers, order, words, activeLength, next, nextWords, n, wordShift, sample, shouldStop);
-        collectReturns(next, outcome.active, n, geometry, sample, null, sums);
-        activeLength = outcome.active;
-        [order, next] = [next, order];
-        [words, nextWords] = [nextWords, words];
-      }
+      if (r.active > 0) refineLevel(r, n, context, sums);
+      activeLength = r.active;
       finish(n, sums, activeLength);
-      if (n < maxN && activeLength > 0 && sums.classes >= wantedClasses && classRuns(order, activeLength).largest * groups <= activeLength) {
+      if (n < maxN && activeLength > 0 && sums.classes >= wantedClasses && classRuns(r.order, activeLength).largest * groups <= activeLength) {
         n++;
-        return order;
+        return r.order;
       }
     }
     return null;
@@ -348,11 +368,15 @@ export async function scanReturnsSplit(
   };
 }
 
-function entriesOf(job: ScanJob): number {
-  if (job.kind !== 'group') return 0;
+/** Entries of a group's slices (classSlices: the length is the third of each four). */
+function sliceEntries(slices: Int32Array): number {
   let entries = 0;
-  for (let i = 2; i < job.task.slices.length; i += 4) entries += job.task.slices[i];
+  for (let i = 2; i < slices.length; i += 4) entries += slices[i];
   return entries;
+}
+
+function entriesOf(job: ScanJob): number {
+  return job.kind === 'group' ? sliceEntries(job.task.slices) : 0;
 }
 
 function largestOf(values: Int32Array): number {
