@@ -1,19 +1,15 @@
 import { calibrationBelongsTo, PROGRAM_VERSION } from '../core';
 import type { AnalysisResult, CalibrationResult } from '../core';
 import { calibrationFigure } from './calibrationFigure';
-import { EXPORT_SIZE } from './exportFigures';
+import { EXPORT_SIZE, type ExportedFigure } from './exportFigures';
 import { figureCaption, type FigureCaption } from './figureCaption';
-import type { Figure, FigureSize } from './figureModel';
+import type { FigureSize } from './figureModel';
 
 /** File stem and CSV name of the calibration figure. */
 export const CALIBRATION_FIGURE_ID = 'calibration';
 export type CalibrationFigureId = typeof CALIBRATION_FIGURE_ID;
 
-export interface ExportedCalibrationFigure {
-  readonly id: CalibrationFigureId;
-  readonly figure: Figure;
-  readonly caption: FigureCaption;
-}
+export type ExportedCalibrationFigure = ExportedFigure<CalibrationFigureId>;
 
 /** The calibration's own words for the caption's view line: replicates, seed, fitted order. */
 export function calibrationViewText(cal: CalibrationResult): string {

@@ -1,18 +1,14 @@
 import type { ComparisonResult } from '../core';
 import { comparisonConvergenceFigure, comparisonQuantileFigure } from './comparisonFigures';
-import { EXPORT_SIZE } from './exportFigures';
+import { EXPORT_SIZE, type ExportedFigure } from './exportFigures';
 import { figureCaption, type FigureCaption } from './figureCaption';
-import type { Figure, FigureSize } from './figureModel';
+import type { FigureSize } from './figureModel';
 
 /** The comparison views, in the order the workbench shows them; also the file stems. */
 export const COMPARISON_FIGURE_IDS = ['compare-convergence', 'compare-qq'] as const;
 export type ComparisonFigureId = (typeof COMPARISON_FIGURE_IDS)[number];
 
-export interface ExportedComparisonFigure {
-  readonly id: ComparisonFigureId;
-  readonly figure: Figure;
-  readonly caption: FigureCaption;
-}
+export type ExportedComparisonFigure = ExportedFigure<ComparisonFigureId>;
 
 /** The name exported comparison files start with: both inputs, e.g. 'a.txt vs b.txt'. */
 export function comparisonInputName(result: ComparisonResult): string {

@@ -1,19 +1,15 @@
 import type { AnalysisResult } from '../core';
 import { autocorrelationFigure } from './autocorrelationFigure';
-import { EXPORT_SIZE } from './exportFigures';
+import { EXPORT_SIZE, type ExportedFigure } from './exportFigures';
 import { figureCaption, type FigureCaption } from './figureCaption';
-import type { Figure, FigureSize } from './figureModel';
+import type { FigureSize } from './figureModel';
 import { mixingFigure } from './mixingFigure';
 
 /** The diagnostics views, in the order the workbench shows them; also the file stems. */
 export const DIAGNOSTIC_FIGURE_IDS = ['mixing-beta', 'information-acf'] as const;
 export type DiagnosticFigureId = (typeof DIAGNOSTIC_FIGURE_IDS)[number];
 
-export interface ExportedDiagnosticFigure {
-  readonly id: DiagnosticFigureId;
-  readonly figure: Figure;
-  readonly caption: FigureCaption;
-}
+export type ExportedDiagnosticFigure = ExportedFigure<DiagnosticFigureId>;
 
 /** True for the ids of the diagnostics views (the export toolbar picks their caption with it). */
 export function isDiagnosticFigureId(id: string): id is DiagnosticFigureId {

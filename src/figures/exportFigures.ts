@@ -29,8 +29,10 @@ export interface ExportViewOptions extends EnvelopeOptions {
 /** The workbench's default view options (src/ui/store/viewSlice.ts DEFAULT_VIEW holds the same). */
 export const DEFAULT_EXPORT_VIEW: ExportViewOptions = { ...DEFAULT_ENVELOPE_OPTIONS, showPaths: true, fluctuationN: null, fluctuationGap: 1, returnLawN: null };
 
-export interface ExportedFigure {
-  readonly id: ExportFigureId;
+/** One exported view: its id (also the file stem), the figure and its caption. The comparison,
+ * diagnostics and calibration exports use it with their own ids. */
+export interface ExportedFigure<Id extends string = ExportFigureId> {
+  readonly id: Id;
   readonly figure: Figure;
   readonly caption: FigureCaption;
 }
