@@ -1,7 +1,8 @@
-import { proxy, transfer, wrap } from 'comlink';
+import { proxy, transfer } from 'comlink';
 import type { Remote } from 'comlink';
 import type { AnalysisResult, AnalysisSettings, LengthRow } from '../core';
 import type { AnalysisApi, AnalysisProgress, AnalysisReport, FileReadOptions } from '../../workers/analysis.worker';
+import { workerHandle, type WorkerLike } from './workerHandle';
 
 export type { AnalysisProgress, AnalysisReport, FileReadOptions };
 
@@ -42,8 +43,7 @@ export function workerStoppedMessage(detail: string): string {
   return `the analysis stopped unexpectedly (${detail}); the settings and the rows computed so far are kept: press Run to start it again`;
 }
 
-/** Anything with the Worker surface the client uses; tests hand in a fake. */
-export type WorkerLike = Pick<Worker, 'terminate' | 'addEventListener'> & Parameters<typeof wrap>[0];
+export type { WorkerLike };
 
 function startAnalysisWorker(): Worker {
   return new Worker(new URL('../../workers/analysis.worker.ts', import.meta.url), { type: 'module', name: 'returnrate-analysis' });
@@ -64,64 +64,22 @@ function reportListener(options: CallOptions): (report: AnalysisReport) => void 
 
 /** A client that starts its worker lazily with `start` (default: workers/analysis.worker.ts as a module worker). */
 export function createAnalysisClient(start: () => WorkerLike = startAnalysisWorker): AnalysisClient {
-  let worker: WorkerLike | null = null;
-  let remote: Remote<AnalysisApi> | null = null;
-  const pending = new Set<(reason: unknown) => void>();
-
-  const stop = (reason: unknown): void => {
-    worker?.terminate();
-    worker = null;
-    remote = null;
-    for (const reject of [...pending]) reject(reason);
-    pending.clear();
-  };
-
-  const ensure = (): Remote<AnalysisApi> => {
-    if (remote !== null) return remote;
-    const w = start();
-    // A worker that fails to load or throws outside a call would leave calls hanging; fail them.
-    w.addEventListener('error', (event: Event) => {
-      const detail = (event as Partial<ErrorEvent>).message;
-      const message = typeof detail === 'string' && detail !== '' ? detail : 'the analysis worker could not start or was stopped';
-      if (worker === w) stop(new WorkerStopped(workerStoppedMessage(message)));
-    });
-    worker = w;
-    if (import.meta.env.DEV) exposeStopHook(w);
-    remote = wrap<AnalysisApi>(w);
-    return remote;
-  };
-
+  // A worker that fails to load or throws outside a call would leave calls hanging; fail them.
+  const handle = workerHandle<AnalysisApi>(
+    start,
+    (detail) => new WorkerStopped(workerStoppedMessage(detail ?? 'the analysis worker could not start or was stopped')),
+    import.meta.env.DEV ? exposeStopHook : undefined,
+  );
   const call = <T>(options: CallOptions, run: (api: Remote<AnalysisApi>, onReport: (r: AnalysisReport) => void) => Promise<T>): Promise<T> => {
     const { signal } = options;
-    if (signal.aborted) return Promise.reject(abortError(signal));
-    const api = ensure();
-    const onReport = proxy(reportListener(options));
-    return new Promise<T>((resolve, reject) => {
-      const onAbort = (): void => stop(abortError(signal));
-      const settle = (): void => {
-        pending.delete(reject);
-        signal.removeEventListener('abort', onAbort);
-      };
-      pending.add(reject);
-      signal.addEventListener('abort', onAbort, { once: true });
-      run(api, onReport).then(
-        (value) => {
-          settle();
-          resolve(value);
-        },
-        (error: unknown) => {
-          settle();
-          reject(error);
-        },
-      );
-    });
+    return handle.call(signal, () => abortError(signal), (api) => run(api, proxy(reportListener(options))));
   };
 
   return {
     analyzeFile: (file, options, settings, c) => call(c, (api, p) => api.analyzeBytes(file, options, settings, p)),
     analyzeBytes: (bytes, options, settings, c) => call(c, (api, p) => api.analyzeBytes(transfer(bytes, [bytes]), options, settings, p)),
     analyzeDemo: (id, length, seed, settings, c) => call(c, (api, p) => api.analyzeDemo(id, length, seed, settings, p)),
-    dispose: () => stop(new DOMException('The analysis worker was shut down.', 'AbortError')),
+    dispose: () => handle.stop(new DOMException('The analysis worker was shut down.', 'AbortError')),
   };
 }
 

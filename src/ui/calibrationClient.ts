@@ -2,6 +2,7 @@ import { wrap } from 'comlink';
 import type { Remote } from 'comlink';
 import type { AnalysisSettings, CalibrationModelFacts, ReplicateRecord } from '../core';
 import type { CalibrationApi, CalibrationInput, FittedInput } from '../../workers/calibration.worker';
+import type { WorkerLike } from './workerHandle';
 
 export type { CalibrationInput };
 
@@ -20,7 +21,7 @@ export interface CalibrationClient {
   calibrate(input: CalibrationInput, settings: AnalysisSettings, replicates: number, baseSeed: number, call: CalibrationCall): Promise<void>;
 }
 
-export type CalibrationWorkerLike = Pick<Worker, 'terminate' | 'addEventListener'> & Parameters<typeof wrap>[0];
+export type CalibrationWorkerLike = WorkerLike;
 
 function startCalibrationWorker(): Worker {
   return new Worker(new URL('../../workers/calibration.worker.ts', import.meta.url), { type: 'module', name: 'returnrate-calibration' });

@@ -1,7 +1,7 @@
-import { proxy, wrap } from 'comlink';
-import type { Remote } from 'comlink';
+import { proxy } from 'comlink';
 import type { AnalysisSettings, ComparisonResult } from '../core';
 import type { ComparisonApi, ComparisonProgress, ComparisonSide } from '../../workers/comparison.worker';
+import { workerHandle, type WorkerLike } from './workerHandle';
 
 export type { ComparisonProgress, ComparisonSide };
 
@@ -15,62 +15,19 @@ export interface ComparisonClient {
   dispose(): void;
 }
 
-export type ComparisonWorkerLike = Pick<Worker, 'terminate' | 'addEventListener'> & Parameters<typeof wrap>[0];
+export type ComparisonWorkerLike = WorkerLike;
 
 function startComparisonWorker(): Worker {
   return new Worker(new URL('../../workers/comparison.worker.ts', import.meta.url), { type: 'module', name: 'returnrate-comparison' });
 }
 
 export function createComparisonClient(start: () => ComparisonWorkerLike = startComparisonWorker): ComparisonClient {
-  let worker: ComparisonWorkerLike | null = null;
-  let remote: Remote<ComparisonApi> | null = null;
-  const pending = new Set<(reason: unknown) => void>();
-
-  const stop = (reason: unknown): void => {
-    worker?.terminate();
-    worker = null;
-    remote = null;
-    for (const reject of [...pending]) reject(reason);
-    pending.clear();
-  };
-
-  const ensure = (): Remote<ComparisonApi> => {
-    if (remote !== null) return remote;
-    const w = start();
-    w.addEventListener('error', (event: Event) => {
-      const detail = (event as Partial<ErrorEvent>).message;
-      if (worker === w) stop(new Error(`Comparison worker failed: ${typeof detail === 'string' && detail !== '' ? detail : 'it could not start'}`));
-    });
-    worker = w;
-    remote = wrap<ComparisonApi>(w);
-    return remote;
-  };
-
+  const handle = workerHandle<ComparisonApi>(start, (detail) => new Error(`Comparison worker failed: ${detail ?? 'it could not start'}`));
   return {
     compare(a, b, settings, signal, onProgress) {
       const reason = (): unknown => signal.reason ?? new DOMException('The comparison was cancelled.', 'AbortError');
-      if (signal.aborted) return Promise.reject(reason());
-      const api = ensure();
-      return new Promise<ComparisonResult>((resolve, reject) => {
-        const onAbort = (): void => stop(reason());
-        const settle = (): void => {
-          pending.delete(reject);
-          signal.removeEventListener('abort', onAbort);
-        };
-        pending.add(reject);
-        signal.addEventListener('abort', onAbort, { once: true });
-        api.compare(a, b, settings, proxy(onProgress)).then(
-          (value) => {
-            settle();
-            resolve(value);
-          },
-          (error: unknown) => {
-            settle();
-            reject(error);
-          },
-        );
-      });
+      return handle.call(signal, reason, (api) => api.compare(a, b, settings, proxy(onProgress)));
     },
-    dispose: () => stop(new DOMException('The comparison worker was shut down.', 'AbortError')),
+    dispose: () => handle.stop(new DOMException('The comparison worker was shut down.', 'AbortError')),
   };
 }
