@@ -1,6 +1,6 @@
 import { expose, releaseProxy } from 'comlink';
 import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPort, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPool, JobPort, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
@@ -83,8 +83,22 @@ function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
 /** Sub-workers the scan of this sequence runs on: one per core when the page is cross-origin
  * isolated and the sequence has at least SHARE_FROM_SYMBOLS symbols, else 1 (this worker). */
 function scanThreads(sequence: Sequence): number {
+  return sharingCores(sequence.symbols.length);
+}
+
+function sharingCores(symbols: number): number {
   const cores = navigator.hardwareConcurrency || 1;
-  return cores >= 2 && self.crossOriginIsolated && sequence.symbols.length >= SHARE_FROM_SYMBOLS ? cores : 1;
+  return cores >= 2 && self.crossOriginIsolated && symbols >= SHARE_FROM_SYMBOLS ? cores : 1;
+}
+
+/**
+ * The sub-workers started before a file is read, when it is large enough that its scan will most
+ * likely be shared (a symbol takes at least one byte in every format): their start and warm-up
+ * (warmUpScan.ts) then overlap the reading. analyzeOnWorkers uses them or closes them.
+ */
+function earlyPool(bytes: number): JobPool | null {
+  const cores = sharingCores(bytes);
+  return cores > 1 ? jobPool(Array.from({ length: cores }, subWorkerPort)) : null;
 }
 
 
@@ -111,9 +125,13 @@ async function analyzeOnWorkers(
   input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
   settings: AnalysisSettings,
   hooks: AnalysisHooks,
+  early: JobPool | null,
 ): Promise<AnalysisResult> {
   const cores = navigator.hardwareConcurrency || 1;
-  if (cores < 2 || sequence.symbols.length < SHARE_FROM_SYMBOLS) return analyzeSequence(sequence, input, settings, hooks);
+  if (cores < 2 || sequence.symbols.length < SHARE_FROM_SYMBOLS) {
+    early?.close();
+    return analyzeSequence(sequence, input, settings, hooks);
+  }
   if (!self.crossOriginIsolated) {
     const result = analyzeSequence(sequence, input, settings, hooks);
     const note = {
@@ -125,7 +143,7 @@ async function analyzeOnWorkers(
   const symbols = sequence.symbols;
   const shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
   shared.set(symbols);
-  const pool = jobPool(Array.from({ length: cores }, subWorkerPort));
+  const pool = early ?? jobPool(Array.from({ length: cores }, subWorkerPort));
   try {
     return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks, pool.close);
   } finally {
@@ -140,15 +158,17 @@ function release(callback: ProgressCallback): void {
 const api = {
   /** Reads bytes (a transferred ArrayBuffer, or a File/Blob streamed in chunks), hashes them and analyses the sequence. */
   async analyzeBytes(input: ArrayBuffer | Blob, options: FileReadOptions, settings: AnalysisSettings, onProgress: ProgressCallback): Promise<AnalysisResult> {
+    const early = earlyPool(input instanceof ArrayBuffer ? input.byteLength : input.size);
     try {
       const { name, ...readerOptions } = options;
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
       const { sequence, warnings } = symbolizedPart(read, readerOptions);
       checkMemory(sequence, settings);
       const summary = { name, sha256: read.sha256, format: readerOptions.format, ...(read.symbolization === undefined ? {} : { symbolization: read.symbolization }) };
-      const result = await analyzeOnWorkers(sequence, summary, settings, levelHooks(settings, onProgress));
+      const result = await analyzeOnWorkers(sequence, summary, settings, levelHooks(settings, onProgress), early);
       return warnings.length === 0 ? result : { ...result, warnings: [...warnings, ...result.warnings] };
     } finally {
+      early?.close();
       release(onProgress);
     }
   },

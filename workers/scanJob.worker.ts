@@ -3,4 +3,8 @@
 import { answerJob } from '../src/core/returns/jobPool';
 import type { JobRequest } from '../src/core/returns/jobPool';
 
-self.onmessage = (event: MessageEvent<JobRequest>) => answerJob(event.data, (reply, transfer) => self.postMessage(reply, { transfer }));
+import { warmUpScan } from '../src/core/returns/warmUpScan';
+
+// Jobs that arrive during the warm-up wait for it, in order; a failed warm-up only costs its time.
+const ready = warmUpScan().catch(() => undefined);
+self.onmessage = (event: MessageEvent<JobRequest>) => void ready.then(() => answerJob(event.data, (reply, transfer) => self.postMessage(reply, { transfer })));

@@ -5,7 +5,7 @@ import { calibrationText } from './calibrationText';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
 import { checkMemory, fitsMemory } from './memoryBudget';
-import { analyzeOnThreads, threadsOption } from './scanThreads';
+import { analyzeOnThreads, threadsAhead, threadsOption, type EarlyThreads } from './scanThreads';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -126,6 +126,15 @@ export async function emitAnalysis(result: AnalysisResult, values: Values, io: C
 
 /** `returnrate analyze FILE [options]`: the estimate with its intervals, as text or JSON. */
 export async function analyzeCommand(file: string | undefined, values: Values, io: CliIo): Promise<void> {
+  const early = threadsAhead(file, values);
+  try {
+    await analyzeWith(file, values, io, early);
+  } finally {
+    early?.pool.close();
+  }
+}
+
+async function analyzeWith(file: string | undefined, values: Values, io: CliIo, early: EarlyThreads | null): Promise<void> {
   const options = settingsFrom(values);
   const calibrate = numberOption(values, 'calibrate', (x) => Number.isInteger(x) && x >= 10 && x <= 100000, 'a whole number of replicates from 10 to 100000');
   const calibrateSeed = numberOption(values, 'calibrate-seed', Number.isSafeInteger, 'a whole number') ?? 1;
@@ -139,6 +148,8 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
   // Chunked runs scan one chunk at a time on one thread; the default thread count yields to memory.
   let threads = chunk === undefined ? threadsOption(values, N) : 1;
   if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;
+  // Threads started during the read that this run will not use end now, not with the run.
+  if (early !== null && early.count !== threads) early.pool.close();
   checkMemory({ ...need, threads }, values);
   if (chunk !== undefined) {
     const started = performance.now();
@@ -169,7 +180,7 @@ export async function analyzeCommand(file: string | undefined, values: Values, i
     },
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
   };
-  const result = threads > 1 ? await analyzeOnThreads(loaded.sequence, loaded.input, settings, threads, hooks) : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
+  const result = threads > 1 ? await analyzeOnThreads(loaded.sequence, loaded.input, settings, threads, hooks, early) : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);
   const analysisSeconds = (performance.now() - t1) / 1000;
   if (progress !== null) io.stderr.write('\n');
   const calibration =

@@ -1,3 +1,4 @@
+import { statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { analyzeSequenceSplit, jobPool, SHARE_FROM_SYMBOLS, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence, type SymbolArray } from '../core';
@@ -75,15 +76,51 @@ export function sharedSymbols(symbols: SymbolArray): SymbolArray {
   return copy;
 }
 
-/** The analysis shared among `threads` worker threads, which end with it. */
+/** Worker threads started before the input is read (threadsAhead). */
+export interface EarlyThreads {
+  readonly count: number;
+  readonly pool: JobPool;
+}
+
+/**
+ * Starts the scan's threads while the input is still being read, when the run will most likely
+ * share its scan: --threads W > 1, or by default a file of at least SHARE_FROM_SYMBOLS bytes (a
+ * symbol takes at least one byte in every format) or --source with such a --length, on a machine
+ * with several cores. A thread's start and its warm-up (warmUpScan.ts) then overlap the reading
+ * instead of delaying the scan. The caller closes the pool, also when the guess was wrong.
+ */
+export function threadsAhead(file: string | undefined, values: Values): EarlyThreads | null {
+  if (values.chunk !== undefined) return null;
+  const given = numberOption(values, 'threads', isPositiveInteger, 'a whole number of at least 1');
+  let count = given ?? 1;
+  if (given === undefined && availableParallelism() >= 2) {
+    const length = values.source !== undefined ? Number(values.length) : file === undefined ? 0 : sizeOf(file);
+    if (length >= SHARE_FROM_SYMBOLS) count = availableParallelism();
+  }
+  return count > 1 ? { count, pool: startScanThreads(count) } : null;
+}
+
+function sizeOf(file: string): number {
+  try {
+    return statSync(file).size;
+  } catch {
+    return 0; // the reader names what is wrong with the file
+  }
+}
+
+/**
+ * The analysis shared among `threads` worker threads, which end with it.
+ * @param early threads started during the read (threadsAhead), used when they are as many
+ */
 export async function analyzeOnThreads(
   sequence: Sequence,
   input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
   settings: AnalysisSettings,
   threads: number,
   hooks: AnalysisHooks,
+  early: EarlyThreads | null = null,
 ): Promise<AnalysisResult> {
-  const pool = startScanThreads(threads);
+  const pool = early !== null && early.count === threads ? early.pool : startScanThreads(threads);
   try {
     return await analyzeSequenceSplit({ ...sequence, symbols: sharedSymbols(sequence.symbols) }, input, settings, threads, pool.run, hooks, pool.close);
   } finally {

@@ -34,7 +34,7 @@ import {
   varianceUnitLabel,
 } from './estimate/units';
 import { varianceGrowth } from './estimate/varianceGrowth';
-import { mixingDiagnostics } from './diagnostics/mixingDiagnostics';
+import { mixingDiagnostics, type ScanFreeDiagnostics } from './diagnostics/mixingDiagnostics';
 
 /** Progress, cancellation and reference facts passed through analyzeSequence. */
 export interface AnalysisHooks {
@@ -134,6 +134,7 @@ export function scanOptionsOf(settings: AnalysisSettings, hooks: AnalysisHooks):
 /**
  * The analysis of a sequence whose scan is done (by scanReturns here, or shared among workers):
  * the estimates from the scan, then the diagnostics from the symbols.
+ * @param scanFree the diagnostics that need no scan, when a worker computed them during it
  */
 export function analyzeScannedSequence(
   sequence: Sequence,
@@ -141,6 +142,7 @@ export function analyzeScannedSequence(
   input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
   settings: AnalysisSettings,
   hooks: AnalysisHooks = {},
+  scanFree?: ScanFreeDiagnostics,
 ): AnalysisResult {
   const listed = alphabetSummary(sequence);
   const summary: InputSummary = {
@@ -157,7 +159,7 @@ export function analyzeScannedSequence(
   const diagnostics = mixingDiagnostics(sequence.symbols, sequence.alphabet.length, {
     informationOrder: result.sigma2.alternatives['information-batch-means']?.lengthsUsed?.[0] ?? 1,
     ...(intervalBatches > 0 ? { batchLength: Math.floor(batchCount / intervalBatches) * batchLength, intervalBatches } : {}),
-  });
+  }, scanFree);
   return { ...result, diagnostics };
 }
 

@@ -2,7 +2,10 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { scanReturns } from '../../src/core/returns/scanReturns';
 import { scanReturnsSplit } from '../../src/core/returns/splitScan';
-import { sharedSymbols, startScanThreads } from '../../src/cli/scanThreads';
+import { sharedSymbols, startScanThreads, threadsAhead } from '../../src/cli/scanThreads';
+import { writeFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { SHARE_FROM_SYMBOLS } from '../../src/core/returns/splitScan';
 import { cli, failureLine, tempFolder } from './cliHarness';
 
 const folder = tempFolder('threads');
@@ -48,6 +51,28 @@ describe('scan on worker threads', () => {
     const round = (v: unknown): unknown => JSON.parse(JSON.stringify(v, (_k, x: unknown) => (typeof x === 'number' ? Number(x.toPrecision(9)) : x)));
     expect(round(two.entropy)).toEqual(round(one.entropy));
     expect(round(two.lengths)).toEqual(round(one.lengths));
+    // The diagnostics ran on a thread beside the class groups: the same numbers exactly.
+    expect(two.diagnostics).toEqual(one.diagnostics);
     expect(failureLine(await cli('analyze', data, '--threads', '0'))).toBe('returnrate: --threads must be a whole number of at least 1; got "0" (see returnrate --help)');
+  });
+
+  it('starts threads before the read only when the run will most likely share its scan', () => {
+    // API contract (scanThreads.ts): --threads W > 1, or a file of at least SHARE_FROM_SYMBOLS bytes.
+    const small = join(folder.dir, 'small.txt');
+    writeFileSync(small, '0101');
+    expect(threadsAhead(small, {})).toBeNull();
+    expect(threadsAhead(small, { threads: '1' })).toBeNull();
+    expect(threadsAhead(join(folder.dir, 'missing.txt'), {})).toBeNull();
+    expect(threadsAhead(undefined, { source: 'coin', length: '1000' })).toBeNull();
+    const given = threadsAhead(small, { threads: '2' });
+    given?.pool.close();
+    expect(given?.count).toBe(2);
+    const chunked = threadsAhead(small, { threads: '2', chunk: '1000' });
+    expect(chunked).toBeNull();
+    const big = threadsAhead(undefined, { source: 'coin', length: String(SHARE_FROM_SYMBOLS) });
+    big?.pool.close();
+    // One thread per core; none on a one-core machine.
+    expect(big?.count ?? 1).toBe(availableParallelism() >= 2 ? availableParallelism() : 1);
+    expect(() => threadsAhead(small, { threads: '0' })).toThrow('--threads');
   });
 });

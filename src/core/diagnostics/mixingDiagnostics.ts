@@ -1,5 +1,5 @@
 import type { SymbolArray } from '../sequence/sequence';
-import { estimateBetaMixing, SIGNAL_FACTOR } from './betaMixing';
+import { estimateBetaMixing, SIGNAL_FACTOR, type BetaMixingEstimate } from './betaMixing';
 import { fitExponentialDecay, fitPowerDecay, fitTailPowerDecay, gapsAboveFloor, type DecayFit } from './decayFits';
 import { INTERVAL_BATCHES } from '../estimate/batchMeans';
 import { informationAutocorrelation } from './informationAutocorrelation';
@@ -60,14 +60,26 @@ export interface DiagnosticsOptions {
   readonly intervalBatches?: number;
 }
 
+/** The diagnostics that need nothing from the scan: plain data, so a worker can compute them while
+ * the scan runs (scanJobs.ts) and post them back. */
+export interface ScanFreeDiagnostics {
+  readonly beta: BetaMixingEstimate | null;
+  readonly moments: InformationMoments | null;
+}
+
+/** The beta-mixing coefficients and the information moments: the costly part of the diagnostics. */
+export function scanFreeDiagnostics(symbols: SymbolArray, alphabetSize: number): ScanFreeDiagnostics {
+  return { beta: estimateBetaMixing(symbols, alphabetSize), moments: informationMoments(symbols, alphabetSize) };
+}
+
 /**
  * All diagnostics for one sequence: beta-mixing coefficients with decay fits, the ACF of the
  * information increments, the one-symbol information moments, and the reading in words.
+ * @param scanFree the part computed already (scanFreeDiagnostics), when a worker did it
  */
-export function mixingDiagnostics(symbols: SymbolArray, alphabetSize: number, options: DiagnosticsOptions): DiagnosticsSummary {
-  const est = estimateBetaMixing(symbols, alphabetSize);
+export function mixingDiagnostics(symbols: SymbolArray, alphabetSize: number, options: DiagnosticsOptions, scanFree?: ScanFreeDiagnostics): DiagnosticsSummary {
+  const { beta: est, moments } = scanFree ?? scanFreeDiagnostics(symbols, alphabetSize);
   const acf = informationAutocorrelation(symbols, alphabetSize, Math.max(1, options.informationOrder));
-  const moments = informationMoments(symbols, alphabetSize);
   let beta: DiagnosticsSummary['beta'] = null;
   let belowFrom: number | null = null;
   if (est !== null) {

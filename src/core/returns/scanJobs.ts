@@ -1,13 +1,23 @@
+import type { SymbolArray } from '../sequence/sequence';
 import { countPrefixes, scanPrefixLevels, type PrefixCountResult, type PrefixCountTask, type PrefixLevelsResult, type PrefixLevelsTask } from './prefixLevels';
 import { scanGroup, type ScanGroupResult, type ScanGroupTask } from './splitScan';
+import { scanFreeDiagnostics, type ScanFreeDiagnostics } from '../diagnostics/mixingDiagnostics';
 
-/** One piece of a shared scan, as plain data that can be posted to a worker thread. */
+/** The sequence whose scan-free diagnostics a thread computes beside the scan's class groups. */
+export interface DiagnosticsTask {
+  readonly symbols: SymbolArray;
+  readonly alphabetSize: number;
+}
+
+/** One piece of a shared analysis, as plain data that can be posted to a worker thread: the scan's
+ * jobs, and the diagnostics that need no scan (analyzeSplit.ts runs them with the class groups). */
 export type ScanJob =
   | { readonly kind: 'count'; readonly task: PrefixCountTask }
   | { readonly kind: 'levels'; readonly task: PrefixLevelsTask }
-  | { readonly kind: 'group'; readonly task: ScanGroupTask };
+  | { readonly kind: 'group'; readonly task: ScanGroupTask }
+  | { readonly kind: 'diagnostics'; readonly task: DiagnosticsTask };
 
-export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult;
+export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult | ScanFreeDiagnostics;
 
 /** Runs a batch of jobs (in this process in tests, on worker threads in hosts); results in job order. */
 export type ScanRunner = (jobs: ScanJob[]) => ScanJobResult[] | Promise<ScanJobResult[]>;
@@ -20,6 +30,8 @@ export function runScanJob(job: ScanJob): ScanJobResult {
       return scanPrefixLevels(job.task);
     case 'group':
       return scanGroup(job.task);
+    case 'diagnostics':
+      return scanFreeDiagnostics(job.task.symbols, job.task.alphabetSize);
   }
 }
 
@@ -35,12 +47,15 @@ export function jobTransfers(job: ScanJob): ArrayBuffer[] {
       return movable([job.task.counts, job.task.after]);
     case 'group':
       return movable([job.task.slices]);
+    case 'diagnostics':
+      return [];
   }
 }
 
 /** Buffers of a result, moved back to the caller. */
 export function resultTransfers(result: ScanJobResult): ArrayBuffer[] {
   if ('first' in result) return movable([result.counts, result.first]);
+  if ('moments' in result) return [];
   const perLevel = result.sums.flatMap((s) => [s.batches, s.histogram]);
   const own = 'laidOut' in result ? [result.laidOut, result.laidWords] : [];
   return movable([result.paths, result.pathCounts, ...perLevel, ...own]);
