@@ -1,13 +1,14 @@
 import { expose, releaseProxy } from 'comlink';
 import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPool, JobPort, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPool, JobPort, ShareProgress, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
 
 /** Reading reports bytes read; the scan reports each finished block length n and the positions still active. */
 export type AnalysisProgress =
   | { readonly kind: 'read'; readonly bytes: number; readonly totalBytes: number }
-  | { readonly kind: 'level'; readonly n: number; readonly active: number };
+  | { readonly kind: 'level'; readonly n: number; readonly active: number }
+  | ({ readonly kind: 'shares' } & ShareProgress);
 /** Rows of the per-n table finished since the last such report (in the run's unit), for the partial view. */
 export interface RowsReport {
   readonly kind: 'rows';
@@ -23,11 +24,12 @@ const READ_REPORT_BYTES = 1 << 22;
 const ROW_REPORT_MS = 100;
 
 /** Level hooks that report progress per level and the finished table rows, coalesced (rowThrottle.ts). */
-function levelHooks(settings: AnalysisSettings, onProgress: ProgressCallback): Pick<AnalysisHooks, 'onLevel' | 'onLevelStats'> {
+function levelHooks(settings: AnalysisSettings, onProgress: ProgressCallback): Pick<AnalysisHooks, 'onLevel' | 'onLevelStats' | 'onShares'> {
   const throttle = createRowThrottle<LengthRow>(ROW_REPORT_MS, (rows) => onProgress({ kind: 'rows', rows }));
   let previous: LevelStats | null = null;
   return {
     onLevel: (n, active) => onProgress({ kind: 'level', n, active }),
+    onShares: (shares) => onProgress({ kind: 'shares', ...shares }),
     onLevelStats: (level) => {
       throttle.push(lengthRowOfLevel(level, previous, settings.unit), performance.now());
       previous = level;

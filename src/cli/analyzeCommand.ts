@@ -1,6 +1,6 @@
 import { basename } from 'node:path';
 import { ANALYSIS_SET_SCHEMA, analyzeSequence, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
-import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, SymbolizationRecord } from '../core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, ShareProgress, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
@@ -108,13 +108,20 @@ async function emit(json: unknown, results: readonly AnalysisResult[], values: V
  * when --progress is given or standard error is a terminal; null otherwise (pipes and tests stay
  * clean).
  */
-function progressLine(io: CliIo, values: Values, maxN: number, started: number): ((n: number, active: number) => void) | null {
+function progressLine(io: CliIo, values: Values, maxN: number, started: number): ProgressLine | null {
   const terminal = (io.stderr as { isTTY?: boolean }).isTTY === true;
   if (values.progress !== true && !terminal) return null;
-  return (n, active) => {
-    const seconds = ((performance.now() - started) / 1000).toFixed(1);
-    io.stderr.write(`\rreturnrate: block length ${n} of ${maxN}, ${active.toLocaleString('en-US')} positions still in play, ${seconds} s   `);
+  const seconds = (): string => ((performance.now() - started) / 1000).toFixed(1);
+  return {
+    level: (n, active) => io.stderr.write(`\rreturnrate: block length ${n} of ${maxN}, ${active.toLocaleString('en-US')} positions still in play, ${seconds()} s   `),
+    // While the threads' class groups run, no level completes: count the groups instead.
+    shares: ({ done, total, firstN }) => io.stderr.write(`\rreturnrate: block lengths ${firstN} to ${maxN} on the threads, ${done} of ${total} groups done, ${seconds()} s   `),
   };
+}
+
+interface ProgressLine {
+  level(n: number, active: number): void;
+  shares(progress: ShareProgress): void;
 }
 
 /** A result's JSON, summary, figures and report, as `analyze` writes them (also for chunked runs and `merge`). */
@@ -176,8 +183,9 @@ async function analyzeWith(file: string | undefined, values: Values, io: CliIo, 
     onLevel: (n, active) => {
       positionLevels += active;
       lastActive = active;
-      progress?.(n, active);
+      progress?.level(n, active);
     },
+    ...(progress === null ? {} : { onShares: progress.shares }),
     ...(loaded.reference === undefined ? {} : { reference: loaded.reference }),
   };
   const result = threads > 1 ? await analyzeOnThreads(loaded.sequence, loaded.input, settings, threads, hooks, early) : analyzeSequence(loaded.sequence, loaded.input, settings, hooks);

@@ -58,9 +58,9 @@ export function startScanThreads(count: number): JobPool {
   const pool = jobPool(Array.from({ length: count }, threadPort));
   if (process.env.RETURNRATE_DEBUG !== '1') return pool;
   const started = performance.now();
-  const run: ScanRunner = async (jobs) => {
+  const run: ScanRunner = async (jobs, onDone) => {
     const from = performance.now();
-    const results = await pool.run(jobs);
+    const results = await pool.run(jobs, onDone);
     const seconds = (t: number) => ((t - started) / 1000).toFixed(2);
     process.stderr.write(`returnrate: debug: ${jobs.length} ${jobs[0]?.kind ?? ''} jobs from ${seconds(from)} s to ${seconds(performance.now())} s\n`);
     return results;

@@ -10,7 +10,7 @@ import { alphabetSummary } from './result/alphabetSummary';
 import { ANALYSIS_SCHEMA } from './result/analysisResult';
 import { PROGRAM_VERSION } from './result/version';
 import type { LevelStats, ReturnScan } from './returns/levelStats';
-import { scanReturns, type ScanOptions } from './returns/scanReturns';
+import { scanReturns, type ScanOptions, type ShareProgress } from './returns/scanReturns';
 import type { Sequence } from './sequence/sequence';
 import { batchMeansInterval, batchPlan, INTERVAL_BATCHES } from './estimate/batchMeans';
 import { chooseEntropyHeadline, type EntropyMethod } from './estimate/entropyHeadline';
@@ -44,6 +44,8 @@ export interface AnalysisHooks {
    * results level by level (lengthRowOfLevel builds the table row). The level is the scan's own:
    * read it, do not keep mutating it. */
   readonly onLevelStats?: (level: LevelStats, active: number) => void;
+  /** Shared scans: the class groups' progress (ScanOptions.onShares), while no level completes. */
+  readonly onShares?: (progress: ShareProgress) => void;
   /** Polled during the scan; returning true abandons it with ScanCancelled. */
   readonly shouldStop?: () => boolean;
   /** Facts of the reference source the sequence was generated from, in nats; the result states them
@@ -128,6 +130,7 @@ export function scanOptionsOf(settings: AnalysisSettings, hooks: AnalysisHooks):
           },
         }),
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
+    ...(hooks.onShares === undefined ? {} : { onShares: hooks.onShares }),
   };
 }
 

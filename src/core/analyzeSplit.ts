@@ -37,9 +37,10 @@ export async function analyzeSequenceSplit(
  */
 function withDiagnostics(run: ScanRunner, task: DiagnosticsTask): { run: ScanRunner; result: () => ScanFreeDiagnostics | undefined } {
   let done: ScanFreeDiagnostics | undefined;
-  const along: ScanRunner = async (jobs) => {
-    if (done !== undefined || jobs[0]?.kind !== 'group') return run(jobs);
-    const results = await run([...jobs, { kind: 'diagnostics', task }]);
+  const along: ScanRunner = async (jobs, onDone) => {
+    if (done !== undefined || jobs[0]?.kind !== 'group') return run(jobs, onDone);
+    // Progress counts the groups only: the diagnostics job is not one of the scan's.
+    const results = await run([...jobs, { kind: 'diagnostics', task }], onDone === undefined ? undefined : (index) => index < jobs.length && onDone(index));
     done = results.pop() as ScanFreeDiagnostics;
     return results;
   };

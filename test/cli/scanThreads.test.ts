@@ -53,6 +53,12 @@ describe('scan on worker threads', () => {
     expect(round(two.lengths)).toEqual(round(one.lengths));
     // The diagnostics ran on a thread beside the class groups: the same numbers exactly.
     expect(two.diagnostics).toEqual(one.diagnostics);
+    // While the class groups run, the progress line counts them (API contract: analyzeCommand.ts).
+    const shown = (await cli('analyze', data, '--format', 'chars', '--max-n', '16', '--threads', '2', '--progress', '--quiet')).stderr.split('\r');
+    const groups = shown.filter((line) => line.includes('groups done')).map((line) => /(\d+) of (\d+) groups done/.exec(line)!.slice(1).map(Number));
+    expect(groups[0]![0]).toBe(0);
+    expect(groups.at(-1)![0]).toBe(groups.at(-1)![1]);
+    expect(groups.map(([done]) => done)).toEqual(Array.from({ length: groups.length }, (_, k) => k));
     expect(failureLine(await cli('analyze', data, '--threads', '0'))).toBe('returnrate: --threads must be a whole number of at least 1; got "0" (see returnrate --help)');
   });
 

@@ -26,7 +26,15 @@ export interface JobPool {
  * and serve every batch of the scan). One batch at a time; a failing worker fails the batch.
  */
 export function jobPool(ports: JobPort[]): JobPool {
-  let batch: { jobs: ScanJob[]; results: ScanJobResult[]; next: number; done: number; resolve: (r: ScanJobResult[]) => void; reject: (e: Error) => void } | null = null;
+  let batch: {
+    jobs: ScanJob[];
+    results: ScanJobResult[];
+    next: number;
+    done: number;
+    onDone: ((index: number) => void) | undefined;
+    resolve: (r: ScanJobResult[]) => void;
+    reject: (e: Error) => void;
+  } | null = null;
   const give = (port: JobPort): void => {
     if (batch === null || batch.next >= batch.jobs.length) return;
     const index = batch.next++;
@@ -44,6 +52,7 @@ export function jobPool(ports: JobPort[]): JobPool {
         if (batch === null) return;
         if ('error' in reply) return fail(new Error(`a scan worker failed: ${reply.error}`));
         batch.results[reply.index] = reply.result;
+        batch.onDone?.(reply.index);
         if (++batch.done === batch.jobs.length) {
           const finished = batch;
           batch = null;
@@ -53,11 +62,11 @@ export function jobPool(ports: JobPort[]): JobPool {
       fail,
     );
   }
-  const run: ScanRunner = (jobs) =>
+  const run: ScanRunner = (jobs, onDone) =>
     new Promise<ScanJobResult[]>((resolve, reject) => {
       if (batch !== null) throw new Error('jobPool runs one batch at a time');
       if (jobs.length === 0) return resolve([]);
-      batch = { jobs, results: new Array<ScanJobResult>(jobs.length), next: 0, done: 0, resolve, reject };
+      batch = { jobs, results: new Array<ScanJobResult>(jobs.length), next: 0, done: 0, onDone, resolve, reject };
       for (const port of ports) give(port);
     });
   return { run, close: () => ports.forEach((p) => p.close()) };

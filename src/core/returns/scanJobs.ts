@@ -19,8 +19,9 @@ export type ScanJob =
 
 export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult | ScanFreeDiagnostics;
 
-/** Runs a batch of jobs (in this process in tests, on worker threads in hosts); results in job order. */
-export type ScanRunner = (jobs: ScanJob[]) => ScanJobResult[] | Promise<ScanJobResult[]>;
+/** Runs a batch of jobs (in this process in tests, on worker threads in hosts); results in job order.
+ * onDone, when given, hears the index of each job as it finishes. */
+export type ScanRunner = (jobs: ScanJob[], onDone?: (index: number) => void) => ScanJobResult[] | Promise<ScanJobResult[]>;
 
 export function runScanJob(job: ScanJob): ScanJobResult {
   switch (job.kind) {
@@ -36,7 +37,12 @@ export function runScanJob(job: ScanJob): ScanJobResult {
 }
 
 /** A runner that runs every job here, one after the other. */
-export const inThisThread: ScanRunner = (jobs) => jobs.map(runScanJob);
+export const inThisThread: ScanRunner = (jobs, onDone) =>
+  jobs.map((job, k) => {
+    const result = runScanJob(job);
+    onDone?.(k);
+    return result;
+  });
 
 /** Buffers a job owns alone and can move to its thread (never the shared symbols). */
 export function jobTransfers(job: ScanJob): ArrayBuffer[] {

@@ -8,6 +8,15 @@ import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayo
 
 export { ScanCancelled } from './partitionLevel';
 
+/** How far the class groups of a shared scan are: `done` of `total` jobs, for levels firstN..maxN. */
+export interface ShareProgress {
+  readonly done: number;
+  readonly total: number;
+  readonly firstN: number;
+  /** Positions in play when the groups started. */
+  readonly active: number;
+}
+
 export interface ScanOptions {
   /** Largest block length, 1 <= maxN <= N. */
   readonly maxN: number;
@@ -23,6 +32,9 @@ export interface ScanOptions {
   readonly onLevel?: (level: LevelStats, active: number) => void;
   /** Polled between classes; returning true abandons the scan with ScanCancelled. */
   readonly shouldStop?: () => boolean;
+  /** Shared scans only (splitScan.ts): called when the class groups that compute levels firstN to
+   * maxN start (done 0) and as each finishes, since no level is complete before all are. */
+  readonly onShares?: (progress: ShareProgress) => void;
   /** Keep the forward return of every position at this one block length (see ReturnScan.captured). */
   readonly captureLevel?: number;
   /** Positions per fine batch (a power of two), overriding batchTarget: chunked runs use the whole

@@ -345,7 +345,10 @@ export async function scanReturnsSplit(
     jobs.sort((a, b) => entriesOf(b) - entriesOf(a));
     // Jobs on other threads cannot poll shouldStop; a host that cancels ends its threads instead.
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-    const results = (await run(jobs)) as ScanGroupResult[];
+    const shares = { total: jobs.length, firstN: n, active: activeLength };
+    options.onShares?.({ ...shares, done: 0 });
+    let done = 0;
+    const results = (await run(jobs, options.onShares === undefined ? undefined : () => options.onShares?.({ ...shares, done: ++done }))) as ScanGroupResult[];
     results.forEach(mergePaths);
     for (let j = 0; n <= maxN; n++, j++) {
       const sums = results.map((r) => r.sums[j]).reduce(addSums);

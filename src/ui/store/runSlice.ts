@@ -16,6 +16,8 @@ export type RunPhase =
       readonly startedAtMs: number;
       /** The scan's level reports so far, for the time-left rule (see view/timeLeft.ts); null before the first. */
       readonly levels: LevelTrack | null;
+      /** Clock times (ms) of the first and the last report of a shared scan's class groups; null before. */
+      readonly shares: { readonly firstAtMs: number; readonly lastAtMs: number } | null;
     };
 
 /**
@@ -117,7 +119,7 @@ export function runActions(store: StoreHandle) {
     beginRun(label: string, maxN: number, atMs: number = Date.now(), unit: EntropyUnit = 'nat'): number {
       const id = store.getState().lastRunId + 1;
       store.setState({
-        run: { status: 'running', id, label, maxN, progress: null, startedAtMs: atMs, levels: null },
+        run: { status: 'running', id, label, maxN, progress: null, startedAtMs: atMs, levels: null, shares: null },
         failure: null,
         lastRunId: id,
         partial: { runId: id, label, unit, maxN, rows: [], status: 'running' },
@@ -140,12 +142,13 @@ export function runActions(store: StoreHandle) {
         return { partial: { ...partial, rows: [...partial.rows, ...added] } };
       });
     },
-    /** Stores the latest report; level reports also feed the time-left track. */
+    /** Stores the latest report; level and share reports also feed the time-left tracks. */
     reportProgress(id: number, progress: AnalysisProgress, atMs: number = Date.now()): void {
       store.setState((s) => {
         if (!isCurrent(id) || s.run.status !== 'running') return s;
         const levels = progress.kind === 'level' ? trackLevel(s.run.levels, progress.active, atMs) : s.run.levels;
-        return { run: { ...s.run, progress, levels } };
+        const shares = progress.kind === 'shares' ? { firstAtMs: s.run.shares?.firstAtMs ?? atMs, lastAtMs: atMs } : s.run.shares;
+        return { run: { ...s.run, progress, levels, shares } };
       });
     },
     /** Stores the result (replacing the previous snapshot) and returns to idle. */

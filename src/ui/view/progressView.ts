@@ -35,6 +35,22 @@ export function progressView(run: RunPhase, nowMs: number = Date.now()): Progres
       timeLeft: null,
     };
   }
+  if (p.kind === 'shares') {
+    // No level completes until every group is done: the bar moves by finished groups, and the time
+    // left is the time per group so far times the groups still to come (they are of about equal work).
+    const span = run.maxN - (p.firstN - 1);
+    const shares = run.shares;
+    const perShare = shares !== null && p.done > 0 ? (shares.lastAtMs - shares.firstAtMs) / 1000 / p.done : null;
+    const left = perShare === null ? null : Math.max(0, perShare * (p.total - p.done) - (nowMs - (shares?.lastAtMs ?? nowMs)) / 1000);
+    return {
+      status: 'Running',
+      detail: `Block lengths n = ${p.firstN} to ${run.maxN}, shared among workers: ${p.done} of ${p.total} groups of blocks done · ${formatCount(p.active)} positions in play`,
+      value: p.firstN - 1 + (span * p.done) / Math.max(1, p.total),
+      max: run.maxN,
+      elapsed,
+      timeLeft: left === null ? 'time left: estimating…' : timeLeftText(left),
+    };
+  }
   const track = run.levels;
   const left =
     track === null

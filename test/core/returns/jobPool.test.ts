@@ -37,6 +37,14 @@ describe('jobPool', () => {
     expect(await pool.run([countJob(0, 8)])).toEqual([runScanJob(countJob(0, 8))]);
   });
 
+  it('names each job to onDone as it finishes, in the order they finish', async () => {
+    // API contract (ScanRunner): the slow worker's job 1 finishes last.
+    const pool = jobPool([fakePort(1, []), fakePort(40, [])]);
+    const finished: number[] = [];
+    await pool.run([countJob(0, 1), countJob(1, 2), countJob(2, 3)], (index) => finished.push(index));
+    expect(finished).toEqual([0, 2, 1]);
+  });
+
   it('fails the batch with the worker error, and a batch of no jobs is empty', async () => {
     const pool = jobPool([fakePort(1, [], true)]);
     await expect(pool.run([countJob(0, 1)])).rejects.toThrow('a scan worker failed: out of memory');

@@ -10,7 +10,7 @@ describe('run slice', () => {
     const first = s.beginRun('a', 40, 1_000);
     const second = s.beginRun('b', 20, 2_000);
     expect(second).toBe(first + 1);
-    expect(s.store.getState().run).toEqual({ status: 'running', id: second, label: 'b', maxN: 20, progress: null, startedAtMs: 2_000, levels: null });
+    expect(s.store.getState().run).toEqual({ status: 'running', id: second, label: 'b', maxN: 20, progress: null, startedAtMs: 2_000, levels: null, shares: null });
   });
 
   it('level reports build the time-left track: first and last time, the last two counts, the work between', () => {
@@ -23,6 +23,19 @@ describe('run slice', () => {
     const { run } = s.store.getState();
     // by hand: levels 2 and 3 worked on the 1000 and 800 positions left after levels 1 and 2
     expect(run.status === 'running' && run.levels).toEqual({ firstAtMs: 100, lastAtMs: 460, active: 500, previousActive: 800, positionLevelsSinceFirst: 1800 });
+  });
+
+  it('share reports keep the time of the first and of the last, and leave the level track alone', () => {
+    const s = testStore();
+    const id = s.beginRun('x', 40, 0);
+    s.reportProgress(id, { kind: 'level', n: 5, active: 1000 }, 100);
+    const shares = { kind: 'shares', total: 8, firstN: 6, active: 1000 } as const;
+    s.reportProgress(id, { ...shares, done: 0 }, 200);
+    s.reportProgress(id, { ...shares, done: 1 }, 900);
+    s.reportProgress(id, { ...shares, done: 2 }, 1500);
+    const { run } = s.store.getState();
+    expect(run.status === 'running' && run.shares).toEqual({ firstAtMs: 200, lastAtMs: 1500 });
+    expect(run.status === 'running' && run.levels).toMatchObject({ firstAtMs: 100, lastAtMs: 100, active: 1000 });
   });
 
   it('reports of an older run are ignored once a newer one started', () => {

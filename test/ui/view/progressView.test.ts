@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { RunPhase } from '../../../src/ui/store/runSlice';
 import { progressView } from '../../../src/ui/view/progressView';
 
-const base = { status: 'running', id: 1, label: 'x', maxN: 40, startedAtMs: 0, levels: null } as const;
+const base = { status: 'running', id: 1, label: 'x', maxN: 40, startedAtMs: 0, levels: null, shares: null } as const;
 
 describe('progressView', () => {
   it('shows idle with its note, or "Ready."', () => {
@@ -39,5 +39,20 @@ describe('progressView', () => {
     expect(progressView(slow, 100_100).timeLeft).toBe('about 38 s left');
     expect(progressView(slow, 110_100).timeLeft).toBe('about 28 s left');
     expect(progressView(slow, 110_100).elapsed).toBe('1 min 50 s elapsed');
+  });
+
+  it('moves the bar by finished class groups of a shared scan, with the time per group so far', () => {
+    // API contract (progressView.ts): levels 6..40 span 35 of the bar; 3 of 8 groups done in 6 s,
+    // so 2 s per group and 5 groups (10 s) to come, counted down since the last report.
+    const shares = { kind: 'shares', done: 3, total: 8, firstN: 6, active: 9_000_000 } as const;
+    const run: RunPhase = { ...base, progress: shares, shares: { firstAtMs: 1_000, lastAtMs: 7_000 } };
+    const view = progressView(run, 9_000);
+    expect(view.detail).toBe('Block lengths n = 6 to 40, shared among workers: 3 of 8 groups of blocks done · 9,000,000 positions in play');
+    expect(view.value).toBeCloseTo(5 + (35 * 3) / 8, 12);
+    expect(view.max).toBe(40);
+    expect(view.timeLeft).toBe('about 8 s left');
+    const started = progressView({ ...run, progress: { ...shares, done: 0 }, shares: { firstAtMs: 1_000, lastAtMs: 1_000 } }, 2_000);
+    expect(started.timeLeft).toBe('time left: estimating…');
+    expect(started.value).toBe(5);
   });
 });
