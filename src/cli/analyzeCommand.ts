@@ -1,11 +1,11 @@
 import { basename } from 'node:path';
-import { ANALYSIS_SET_SCHEMA, analyzeSequence, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, chunkPlan, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, ShareProgress, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
 import { guessFileFormat } from './guessFileFormat';
 import { checkMemory, fitsMemory } from './memoryBudget';
-import { analyzeOnThreads, threadsAhead, threadsOption, type EarlyThreads } from './scanThreads';
+import { analyzeOnThreads, chunkThreadsOption, threadsAhead, threadsOption, type EarlyThreads } from './scanThreads';
 import { numberOption, isPositiveInteger, readerOptionsFrom, settingsFrom } from './options';
 import { openOutput } from './outputStream';
 import { readInputFile } from './readInput';
@@ -152,23 +152,23 @@ async function analyzeWith(file: string | undefined, values: Values, io: CliIo, 
   const chunk = chunkSizeOption(values);
   const N = loaded.sequence.symbols.length;
   const need = { symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null };
-  // Chunked runs scan one chunk at a time on one thread; the default thread count yields to memory.
-  let threads = chunk === undefined ? threadsOption(values, N) : 1;
+  // Chunked runs give each thread one chunk at a time; the default thread count yields to memory.
+  let threads = chunk === undefined ? threadsOption(values, N) : chunkThreadsOption(values, N, chunkPlan(N, chunk, settings.maxN).chunkCount);
   if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;
   // Threads started during the read that this run will not use end now, not with the run.
   if (early !== null && early.count !== threads) early.pool.close();
   checkMemory({ ...need, threads }, values);
   if (chunk !== undefined) {
     const started = performance.now();
-    await chunkedAnalyze(loaded, settings, chunk, values, io, (r) => emitAnalysis(r, values, io));
+    await chunkedAnalyze(loaded, settings, chunk, threads, values, io, (r) => emitAnalysis(r, values, io));
     if (values.timing === true) {
       const timing = {
         symbols: N,
         readSeconds: loaded.readSeconds,
         analysisSeconds: (performance.now() - started) / 1000,
         peakRssBytes: process.resourceUsage().maxRSS * 1024,
-        threads: 1,
-        estimatedPeakBytes: estimatePeakMemory({ ...need, threads: 1 }).totalBytes,
+        threads,
+        estimatedPeakBytes: estimatePeakMemory({ ...need, threads }).totalBytes,
       };
       io.stderr.write(`timing ${JSON.stringify(timing)}\n`);
     }

@@ -1,10 +1,11 @@
 import { createHash } from 'node:crypto';
 import { readFile, writeFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
-import { analyzeParts, analyzeSequenceChunked, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk } from '../core';
-import type { AnalysisResult, AnalysisSettings, InputSummary, PartFileContents, ReferenceFacts, Sequence } from '../core';
+import { analyzeParts, analyzeSequenceChunked, analyzeSequenceChunkedOn, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk } from '../core';
+import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, PartFileContents, ReferenceFacts, Sequence } from '../core';
 import { alphabetSummary } from '../core';
 import { makeFolder } from './makeFolder';
+import { sharedSymbols, startScanThreads } from './scanThreads';
 import { isPositiveInteger, numberOption } from './options';
 import { OutputError } from './outputStream';
 import type { CliIo } from './runCli';
@@ -29,9 +30,10 @@ export function chunkSizeOption(values: Values): number | undefined {
 
 /**
  * `analyze FILE --chunk SIZE [--plan | --parts-out DIR [--part I]]`: the chunked run in this
- * process, the plan as one JSON line, or part files for `merge`.
+ * process (its chunks shared among `threads` worker threads), the plan as one JSON line, or part
+ * files for `merge`.
  */
-export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSettings, size: number, values: Values, io: CliIo, emit: Emit): Promise<void> {
+export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSettings, size: number, threads: number, values: Values, io: CliIo, emit: Emit): Promise<void> {
   const { sequence } = loaded;
   const N = sequence.symbols.length;
   const plan = chunkPlan(N, size, settings.maxN);
@@ -43,7 +45,7 @@ export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSetti
   if (values['parts-out'] === undefined) {
     if (partOption !== undefined) throw new UsageError('--part needs --parts-out DIR');
     const hooks = loaded.reference === undefined ? {} : { reference: loaded.reference };
-    await emit(analyzeSequenceChunked(sequence, loaded.input, settings, size, hooks));
+    await emit(threads > 1 ? await chunksOnThreads(loaded, settings, size, threads, hooks) : analyzeSequenceChunked(sequence, loaded.input, settings, size, hooks));
     return;
   }
   if (partOption !== undefined && partOption >= plan.chunkCount) {
@@ -71,6 +73,16 @@ export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSetti
     const path = join(dir, partFileName(loaded.input.name, k, plan.chunkCount));
     await writeFile(path, partFileJson(part, { input, settings, chunkSha256: chunkDigest(symbols) }));
     io.stderr.write(`returnrate: wrote ${path} (part ${k} of 0 to ${plan.chunkCount - 1})\n`);
+  }
+}
+
+/** The chunked run with its chunks as jobs of `threads` worker threads, which end before it is written. */
+async function chunksOnThreads(loaded: ChunkInput, settings: AnalysisSettings, size: number, threads: number, hooks: AnalysisHooks): Promise<AnalysisResult> {
+  const pool = startScanThreads(threads);
+  try {
+    return await analyzeSequenceChunkedOn({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, size, pool.run, hooks);
+  } finally {
+    pool.close();
   }
 }
 

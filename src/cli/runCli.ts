@@ -67,9 +67,10 @@ analysis options
                              at this N, and h corrected by the bias (two worker threads; R analyses)
       --calibrate-seed S     base seed of the surrogates (default 1)
       --timing               print timing and peak memory as one JSON line on standard error
-      --threads W            share the scan among W worker threads from the first block length on
-                             (default: the number of cores from 5e6 symbols on, fewer when memory
-                             is short; results equal the one-thread run)
+      --threads W            share the scan among W worker threads from the first block length on,
+                             or with --chunk give each thread the next chunk (default: the number
+                             of cores from 5e6 symbols on, fewer when memory is short; results
+                             equal the one-thread run)
       --max-memory SIZE      refuse runs whose estimated peak memory exceeds SIZE (e.g. 2G, 512M;
                              default 90% of the machine's or container's memory) and say what fits
 

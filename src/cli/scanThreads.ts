@@ -16,6 +16,16 @@ export function threadsOption(values: Values, symbols: number): number {
   return symbols >= SHARE_FROM_SYMBOLS ? availableParallelism() : 1;
 }
 
+/**
+ * Threads of a chunked run in this process (chunks are independent jobs): --threads W, or by
+ * default one per core for inputs of at least SHARE_FROM_SYMBOLS symbols; never more than the
+ * chunks. Plans and part files are written by one thread.
+ */
+export function chunkThreadsOption(values: Values, symbols: number, chunks: number): number {
+  const wanted = threadsOption(values, symbols);
+  return values.plan === true || values['parts-out'] !== undefined ? 1 : Math.max(1, Math.min(wanted, chunks));
+}
+
 /** The sources run through tsx (tests, `npm run returnrate`); the bundle has a built worker beside it. */
 const FROM_SOURCES = import.meta.url.endsWith('.ts');
 const WORKER_URL = new URL(FROM_SOURCES ? './scanWorker.ts' : './scanWorker.mjs', import.meta.url);

@@ -2,7 +2,8 @@ import { analyzeFromScan, validateSettings, type AnalysisHooks } from './analyze
 import type { AnalysisResult, AnalysisSettings, InputSummary } from './result/analysisResult';
 import { alphabetSummary } from './result/alphabetSummary';
 import { checkPartsAgree, type PartFileContents } from './result/partFile';
-import { chunkPlan, mergeScanParts, scanChunked, type ChunkPlan } from './returns/chunkedScan';
+import { chunkPlan, mergeScanParts, scanChunked, scanChunkedOn, type ChunkPlan } from './returns/chunkedScan';
+import type { ScanRunner } from './returns/scanJobs';
 import type { ReturnScan } from './returns/levelStats';
 import type { Sequence } from './sequence/sequence';
 
@@ -34,9 +35,7 @@ export function analyzeSequenceChunked(
   chunkSize: number,
   hooks: AnalysisHooks = {},
 ): AnalysisResult {
-  const N = sequence.symbols.length;
-  validateSettings(settings, N);
-  const plan = chunkPlan(N, chunkSize, settings.maxN, hooks.pathSamples);
+  const plan = checkedPlan(sequence, settings, chunkSize, hooks);
   const { onLevel, onLevelStats } = hooks;
   const scan = scanChunked(sequence.symbols, sequence.alphabet.length, plan, {
     onLevel: (level, active) => {
@@ -45,6 +44,45 @@ export function analyzeSequenceChunked(
     },
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
   });
+  return chunkedResult(sequence, scan, plan, input, settings, hooks);
+}
+
+/**
+ * analyzeSequenceChunked with the chunks as jobs for `run` (scanChunkedOn: worker threads in hosts,
+ * each taking the next chunk), so that a chunked run uses every core. The result is that of
+ * analyzeSequenceChunked: the same chunks, merged the same way.
+ * @param onPart hears the count of chunks done after each (levels are only known at the end)
+ * @throws RangeError for invalid settings or chunk size
+ */
+export async function analyzeSequenceChunkedOn(
+  sequence: Sequence,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  chunkSize: number,
+  run: ScanRunner,
+  hooks: AnalysisHooks = {},
+  onPart?: (done: number, total: number) => void,
+): Promise<AnalysisResult> {
+  const plan = checkedPlan(sequence, settings, chunkSize, hooks);
+  const scan = await scanChunkedOn(sequence.symbols, sequence.alphabet.length, plan, run, onPart === undefined ? undefined : (done) => onPart(done, plan.chunkCount));
+  return chunkedResult(sequence, scan, plan, input, settings, hooks);
+}
+
+function checkedPlan(sequence: Sequence, settings: AnalysisSettings, chunkSize: number, hooks: AnalysisHooks): ChunkPlan {
+  validateSettings(settings, sequence.symbols.length);
+  return chunkPlan(sequence.symbols.length, chunkSize, settings.maxN, hooks.pathSamples);
+}
+
+/** The analysis of a merged chunked scan, with the chunk warning. */
+function chunkedResult(
+  sequence: Sequence,
+  scan: ReturnScan,
+  plan: ChunkPlan,
+  input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
+  settings: AnalysisSettings,
+  hooks: AnalysisHooks,
+): AnalysisResult {
+  const N = sequence.symbols.length;
   const listed = alphabetSummary(sequence);
   const summary: InputSummary = {
     ...input,

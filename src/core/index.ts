@@ -143,12 +143,12 @@ export { crossReferenceOfSpecs, transitionRowsOfSpec } from './cross/crossRefere
 export { markovCrossFacts } from './sources/markovCrossEntropy';
 export type { MarkovCrossFacts } from './sources/markovCrossEntropy';
 // Chunked runs and part files (mergeable per-level statistics)
-export { chunkPlan, chunkBounds, mergedPositions, scanChunk, scanChunked, mergeScanParts } from './returns/chunkedScan';
+export { chunkPlan, chunkBounds, mergedPositions, scanChunk, scanChunked, scanChunkedOn, mergeScanParts } from './returns/chunkedScan';
 export type { ChunkPlan, ScanPart, ChunkHooks } from './returns/chunkedScan';
 export { mergeLevelStats, mergeSampledPaths } from './returns/mergeLevels';
 export { PART_SCHEMA, PartFileError, partFileJson, readPartFile, checkPartsAgree } from './result/partFile';
 export type { PartFacts, PartFileContents } from './result/partFile';
-export { analyzeSequenceChunked, analyzeParts, chunkedWarning } from './analyzeChunked';
+export { analyzeSequenceChunked, analyzeSequenceChunkedOn, analyzeParts, chunkedWarning } from './analyzeChunked';
 export { estimatePeakMemory, adviseMemory, memoryAdviceMessage, formatBytes, bytesPerSymbolId, engineBytesPerPosition, DEFAULT_BASE_BYTES } from './returns/memoryEstimate';
 export { pageMemoryCheck, PAGE_MEMORY_BUDGET_BYTES } from './returns/pageMemoryCheck';
 export type { MemoryEstimate, MemoryEstimateInput, MemoryAdvice } from './returns/memoryEstimate';

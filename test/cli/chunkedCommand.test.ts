@@ -50,6 +50,19 @@ describe('analyze --chunk and merge', () => {
     expect(merged.stdout).toBe(inProcess.stdout);
   });
 
+  it('shares the chunks among worker threads with exactly the one-thread result', async () => {
+    // The oracle is the one-thread chunked run (itself checked against part files above and
+    // against the unchunked scan in test/core/returns/chunkedScan.test.ts).
+    const one = await cli('analyze', data, ...common, '--chunk', '5000', '--threads', '1', '--json', '-', '--timing');
+    const two = await cli('analyze', data, ...common, '--chunk', '5000', '--threads', '2', '--json', '-', '--timing');
+    expect(two.code).toBe(0);
+    expect(two.stdout).toBe(one.stdout);
+    const threadsOf = (stderr: string): unknown => (JSON.parse(stderr.split('\n').find((l) => l.startsWith('timing '))!.slice(7)) as { threads: unknown }).threads;
+    expect([threadsOf(one.stderr), threadsOf(two.stderr)]).toEqual([1, 2]);
+    // Never more threads than chunks: 20000 symbols at --chunk 15000 make one chunk.
+    expect(threadsOf((await cli('analyze', data, ...common, '--chunk', '15000', '--threads', '2', '--json', '-', '--timing')).stderr)).toBe(1);
+  });
+
   it('refuses missing, foreign and broken parts and misused options with one line', async () => {
     const dir = join(folder.dir, 'bad');
     await cli('analyze', data, ...common, '--chunk', '5000', '--parts-out', dir);

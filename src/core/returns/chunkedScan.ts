@@ -3,6 +3,7 @@ import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
 import { mergeLevelStats, mergeSampledPaths } from './mergeLevels';
 import { matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
 import { scanReturns } from './scanReturns';
+import type { ScanJob, ScanRunner } from './scanJobs';
 
 /**
  * How a sequence of N symbols is cut into chunks that are scanned on their own and merged.
@@ -225,11 +226,28 @@ export function mergeScanParts(parts: readonly ScanPart[]): ReturnScan {
  * is that of one chunk's scan besides the symbols.
  */
 export function scanChunked(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, hooks: ChunkHooks = {}): ReturnScan {
-  if (symbols.length !== plan.length) throw new RangeError(`the plan is for ${plan.length} symbols; got ${symbols.length}`);
+  checkPlanLength(symbols, plan);
   const parts: ScanPart[] = [];
   for (let k = 0; k < plan.chunkCount; k++) {
     const { offset, length } = chunkBounds(plan, k);
     parts.push(scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, k, hooks));
   }
+  return mergeScanParts(parts);
+}
+
+function checkPlanLength(symbols: SymbolArray, plan: ChunkPlan): void {
+  if (symbols.length !== plan.length) throw new RangeError(`the plan is for ${plan.length} symbols; got ${symbols.length}`);
+}
+
+/**
+ * scanChunked with the chunks as jobs for `run` (worker threads in hosts: a free thread takes the
+ * next chunk), merged as scanChunked merges them. `symbols` should be shared memory, so that the
+ * threads read it without a copy. onPart hears the count of chunks done after each.
+ */
+export async function scanChunkedOn(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, run: ScanRunner, onPart?: (done: number) => void): Promise<ReturnScan> {
+  checkPlanLength(symbols, plan);
+  const jobs: ScanJob[] = Array.from({ length: plan.chunkCount }, (_, index) => ({ kind: 'chunk', task: { symbols, alphabetSize, plan, index } }));
+  let done = 0;
+  const parts = (await run(jobs, onPart === undefined ? undefined : () => onPart(++done))) as ScanPart[];
   return mergeScanParts(parts);
 }

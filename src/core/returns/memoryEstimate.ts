@@ -70,10 +70,13 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   // of one scan's arrays (even classes, a fair coin) and all of them; 3/8 is taken, which measured
   // within 12% of the peak for a fair coin (1e6 to 1e9) and an uneven Markov chain (DEVELOPERS.md,
   // Scale); with half, the coin at 1e9 came out 23% over.
-  const split = threads > 1;
-  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (split ? 2 : 1);
+  // Chunked runs on threads: each thread scans one chunk at a time, as a run of one thread does.
+  const split = threads > 1 && scanned === N;
+  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (threads > 1 ? 2 : 1);
   const wordBytes = alphabetSize <= 0x100 ? 2 : 0;
-  const engineBytes = split ? scanned * (wordBytes + 4 + wordBytes + (3 / 8) * engineBytesPerPosition(alphabetSize)) : scanned * engineBytesPerPosition(alphabetSize);
+  const engineBytes = split
+    ? scanned * (wordBytes + 4 + wordBytes + (3 / 8) * engineBytesPerPosition(alphabetSize))
+    : threads * scanned * engineBytesPerPosition(alphabetSize);
   const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
   const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
   const pathBytes = 256 * maxN * 16;

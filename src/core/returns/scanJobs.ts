@@ -2,6 +2,7 @@ import type { SymbolArray } from '../sequence/sequence';
 import { countPrefixes, scanPrefixLevels, type PrefixCountResult, type PrefixCountTask, type PrefixLevelsResult, type PrefixLevelsTask } from './prefixLevels';
 import { scanGroup, type ScanGroupResult, type ScanGroupTask } from './splitScan';
 import { scanFreeDiagnostics, type ScanFreeDiagnostics } from '../diagnostics/mixingDiagnostics';
+import { chunkBounds, scanChunk, type ChunkPlan, type ScanPart } from './chunkedScan';
 
 /** The sequence whose scan-free diagnostics a thread computes beside the scan's class groups. */
 export interface DiagnosticsTask {
@@ -9,15 +10,25 @@ export interface DiagnosticsTask {
   readonly alphabetSize: number;
 }
 
+/** One chunk of a chunked run (chunkedScan.ts), scanned on its own; `symbols` is the whole sequence. */
+export interface ChunkTask {
+  readonly symbols: SymbolArray;
+  readonly alphabetSize: number;
+  readonly plan: ChunkPlan;
+  readonly index: number;
+}
+
 /** One piece of a shared analysis, as plain data that can be posted to a worker thread: the scan's
- * jobs, and the diagnostics that need no scan (analyzeSplit.ts runs them with the class groups). */
+ * jobs, the diagnostics that need no scan (analyzeSplit.ts runs them with the class groups), and
+ * the chunks of a chunked run. */
 export type ScanJob =
   | { readonly kind: 'count'; readonly task: PrefixCountTask }
   | { readonly kind: 'levels'; readonly task: PrefixLevelsTask }
   | { readonly kind: 'group'; readonly task: ScanGroupTask }
-  | { readonly kind: 'diagnostics'; readonly task: DiagnosticsTask };
+  | { readonly kind: 'diagnostics'; readonly task: DiagnosticsTask }
+  | { readonly kind: 'chunk'; readonly task: ChunkTask };
 
-export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult | ScanFreeDiagnostics;
+export type ScanJobResult = PrefixCountResult | PrefixLevelsResult | ScanGroupResult | ScanFreeDiagnostics | ScanPart;
 
 /** Runs a batch of jobs (in this process in tests, on worker threads in hosts); results in job order.
  * onDone, when given, hears the index of each job as it finishes. */
@@ -33,6 +44,11 @@ export function runScanJob(job: ScanJob): ScanJobResult {
       return scanGroup(job.task);
     case 'diagnostics':
       return scanFreeDiagnostics(job.task.symbols, job.task.alphabetSize);
+    case 'chunk': {
+      const { symbols, alphabetSize, plan, index } = job.task;
+      const { offset, length } = chunkBounds(plan, index);
+      return scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, index);
+    }
   }
 }
 
@@ -54,6 +70,7 @@ export function jobTransfers(job: ScanJob): ArrayBuffer[] {
     case 'group':
       return movable([job.task.slices]);
     case 'diagnostics':
+    case 'chunk':
       return [];
   }
 }
@@ -61,7 +78,8 @@ export function jobTransfers(job: ScanJob): ArrayBuffer[] {
 /** Buffers of a result, moved back to the caller. */
 export function resultTransfers(result: ScanJobResult): ArrayBuffer[] {
   if ('first' in result) return movable([result.counts, result.first]);
-  if ('moments' in result) return [];
+  // Small results, copied: the diagnostics, and a chunk's per-level sums.
+  if ('moments' in result || 'plan' in result) return [];
   const perLevel = result.sums.flatMap((s) => [s.batches, s.histogram]);
   const own = 'laidOut' in result ? [result.laidOut, result.laidWords] : [];
   return movable([result.paths, result.pathCounts, ...perLevel, ...own]);

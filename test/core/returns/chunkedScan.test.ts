@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { chunkBounds, chunkPlan, mergedPositions, mergeScanParts, scanChunk, scanChunked } from '../../../src/core/returns/chunkedScan';
+import { chunkBounds, chunkPlan, mergedPositions, mergeScanParts, scanChunk, scanChunked, scanChunkedOn } from '../../../src/core/returns/chunkedScan';
+import { inThisThread, type ScanRunner } from '../../../src/core/returns/scanJobs';
 import type { LevelStats, ReturnScan } from '../../../src/core/returns/levelStats';
 import { mergeLevelStats } from '../../../src/core/returns/mergeLevels';
 import { scanReturns } from '../../../src/core/returns/scanReturns';
@@ -166,6 +167,22 @@ describe('scanChunked', () => {
       }),
       { numRuns: 25 },
     );
+  });
+
+  it('scanChunkedOn runs every chunk as a job and merges them exactly as scanChunked', async () => {
+    // The oracle is scanChunked (brute-force checked above); same chunks, same merge: equal to the bit.
+    const x = randomSymbols(9000, 3, 17);
+    const plan = chunkPlan(x.length, 2000, 8);
+    const done: number[] = [];
+    const kinds: string[] = [];
+    const run: ScanRunner = (jobs, onDone) => {
+      kinds.push(...jobs.map((j) => j.kind));
+      return inThisThread(jobs, onDone);
+    };
+    const shared = await scanChunkedOn(x, 3, plan, run, (d) => done.push(d));
+    expect(shared).toEqual(scanChunked(x, 3, plan));
+    expect(kinds).toEqual(Array.from({ length: plan.chunkCount }, () => 'chunk'));
+    expect(done).toEqual(Array.from({ length: plan.chunkCount }, (_, k) => k + 1));
   });
 
   it('merges parts given in any order, and refuses a missing, repeated or foreign part', () => {

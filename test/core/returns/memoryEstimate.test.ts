@@ -31,6 +31,10 @@ describe('estimatePeakMemory', () => {
     expect(two.symbolsBytes).toBe(2e8);
     expect(two.engineBytes).toBe(12.5e8);
     expect(two.smallBytes - e.smallBytes).toBe(40 * (1180 + 8 * 191) * 8 + 2 * 16 * 2 ** 20);
+    // a chunked run on two threads: the shared copy, and one chunk's scan (12 bytes a position) per thread
+    const chunkedTwo = estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, chunkSize: 1e7, threads: 2, baseBytes: 0 });
+    expect(chunkedTwo.symbolsBytes).toBe(2e8);
+    expect(chunkedTwo.engineBytes).toBe(2 * 12e7);
   });
 
   it('advises the largest chunk (a multiple of 2^16) that fits, or nothing when the symbols alone do not', () => {
