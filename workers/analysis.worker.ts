@@ -1,5 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
+import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, isShared, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPool, JobPort, ShareProgress, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
@@ -79,7 +79,7 @@ function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: S
 /** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget (core:
  * pageMemoryCheck), counting the sub-workers when the scan will be shared (scanThreads). */
 function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
-  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN, threads: scanThreads(sequence) });
+  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN, threads: scanThreads(sequence), symbolsShared: isShared(sequence.symbols) });
 }
 
 /** Sub-workers the scan of this sequence runs on: one per core when the page is cross-origin
@@ -143,8 +143,12 @@ async function analyzeOnWorkers(
     return { ...result, warnings: [...result.warnings, note] };
   }
   const symbols = sequence.symbols;
-  const shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
-  shared.set(symbols);
+  // Read into shared memory when the sub-workers were started ahead (earlyPool); else copied there.
+  let shared = symbols;
+  if (!isShared(symbols)) {
+    shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
+    shared.set(symbols);
+  }
   const pool = early ?? jobPool(Array.from({ length: cores }, subWorkerPort));
   try {
     return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks, pool.close);
@@ -162,7 +166,8 @@ const api = {
   async analyzeBytes(input: ArrayBuffer | Blob, options: FileReadOptions, settings: AnalysisSettings, onProgress: ProgressCallback): Promise<AnalysisResult> {
     const early = earlyPool(input instanceof ArrayBuffer ? input.byteLength : input.size);
     try {
-      const { name, ...readerOptions } = options;
+      const { name, ...given } = options;
+      const readerOptions = early === null ? given : { ...given, sharedMemory: true };
       const read = input instanceof ArrayBuffer ? readBuffer(input, readerOptions) : await readBlob(input, readerOptions, onProgress);
       const { sequence, warnings } = symbolizedPart(read, readerOptions);
       checkMemory(sequence, settings);

@@ -1,5 +1,5 @@
 import { basename } from 'node:path';
-import { ANALYSIS_SET_SCHEMA, analyzeSequence, chunkPlan, estimatePeakMemory, parseSourceSpec, recordSequences } from '../core';
+import { ANALYSIS_SET_SCHEMA, analyzeSequence, chunkPlan, estimatePeakMemory, isShared, parseSourceSpec, recordSequences } from '../core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, FastaRecord, ReferenceFacts, Sequence, ShareProgress, SymbolizationRecord } from '../core';
 import { calibrationText } from './calibrationText';
 import { chunkedAnalyze, chunkSizeOption } from './chunkedCommand';
@@ -27,7 +27,8 @@ interface Loaded {
   separate: FastaRecord[] | null;
 }
 
-async function load(file: string | undefined, values: Values, io: CliIo): Promise<Loaded> {
+/** @param shared read the symbols into shared memory, for threads started ahead (threadsAhead) */
+async function load(file: string | undefined, values: Values, io: CliIo, shared = false): Promise<Loaded> {
   const t0 = performance.now();
   if (values.source !== undefined) {
     if (file !== undefined) throw new UsageError('give either a FILE or --source, not both');
@@ -45,7 +46,7 @@ async function load(file: string | undefined, values: Values, io: CliIo): Promis
     };
   }
   if (file === undefined) throw new UsageError('analyze needs a FILE (or --source SPEC --length L)');
-  const options = readerOptionsFrom(values, values.format === undefined ? await guessFileFormat(file) : 'chars');
+  const options = { ...readerOptionsFrom(values, values.format === undefined ? await guessFileFormat(file) : 'chars'), ...(shared ? { sharedMemory: true } : {}) };
   const read = await readInputFile(file, options);
   for (const w of read.warnings) io.stderr.write(`returnrate: note: ${w.message}\n`);
   return {
@@ -145,13 +146,13 @@ async function analyzeWith(file: string | undefined, values: Values, io: CliIo, 
   const options = settingsFrom(values);
   const calibrate = numberOption(values, 'calibrate', (x) => Number.isInteger(x) && x >= 10 && x <= 100000, 'a whole number of replicates from 10 to 100000');
   const calibrateSeed = numberOption(values, 'calibrate-seed', Number.isSafeInteger, 'a whole number') ?? 1;
-  const loaded = await load(file, values, io);
+  const loaded = await load(file, values, io, early !== null);
   if (loaded.separate !== null && calibrate !== undefined) throw new UsageError('--calibrate works on one sequence, not with --fasta-records separate');
   if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const chunk = chunkSizeOption(values);
   const N = loaded.sequence.symbols.length;
-  const need = { symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null };
+  const need = { symbols: N, alphabetSize: loaded.sequence.alphabet.length, maxN: settings.maxN, chunkSize: chunk ?? null, symbolsShared: isShared(loaded.sequence.symbols) };
   // Chunked runs give each thread one chunk at a time; the default thread count yields to memory.
   let threads = chunk === undefined ? threadsOption(values, N) : chunkThreadsOption(values, N, chunkPlan(N, chunk, settings.maxN).chunkCount);
   if (threads > 1 && values.threads === undefined && !fitsMemory({ ...need, threads }, values)) threads = 1;

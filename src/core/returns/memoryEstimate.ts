@@ -10,6 +10,8 @@ export interface MemoryEstimateInput {
   readonly chunkSize?: number | null;
   /** Scans held at once (worker threads, each with its own share); default 1. */
   readonly threads?: number;
+  /** The symbols were read into shared memory (ReaderOptions.sharedMemory), so threads need no copy. */
+  readonly symbolsShared?: boolean;
   /** What the host costs before any data (the Node process, the page's worker); default 64 MiB,
    * the resident size of the command line after start-up (measured, DEVELOPERS.md). */
   readonly baseBytes?: number;
@@ -63,7 +65,8 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const threads = input.threads ?? 1;
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be a whole number >= 1; got ${threads}`);
   const scanned = Math.min(N, input.chunkSize ?? N);
-  // Threads (splitScan.ts): the symbols are copied once into shared memory; the range passes leave
+  // Threads (splitScan.ts): the symbols are copied once into shared memory unless the reader wrote
+  // them there; the range passes leave
   // the carried words of every position and each range's layout of the positions in play (positions
   // and words) in shared memory until the scan ends; each thread then keeps the working arrays of its
   // largest class group. With no class above 1/threads of the positions, those hold between a quarter
@@ -72,7 +75,7 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   // Scale); with half, the coin at 1e9 came out 23% over.
   // Chunked runs on threads: each thread scans one chunk at a time, as a run of one thread does.
   const split = threads > 1 && scanned === N;
-  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (threads > 1 ? 2 : 1);
+  const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (threads > 1 && input.symbolsShared !== true ? 2 : 1);
   const wordBytes = alphabetSize <= 0x100 ? 2 : 0;
   const engineBytes = split
     ? scanned * (wordBytes + 4 + wordBytes + (3 / 8) * engineBytesPerPosition(alphabetSize))

@@ -1,4 +1,4 @@
-import { adviseMemory, memoryAdviceMessage } from './memoryEstimate';
+import { adviseMemory, memoryAdviceMessage, type MemoryEstimateInput } from './memoryEstimate';
 
 /**
  * The page's memory budget. A page cannot learn how much memory its worker may take (typed arrays
@@ -13,7 +13,7 @@ export const PAGE_MEMORY_BUDGET_BYTES = 4 * 2 ** 30;
  * @param budgetBytes the page's budget; other values only for tests
  * @throws RangeError with that message
  */
-export function pageMemoryCheck(input: { readonly symbols: number; readonly alphabetSize: number; readonly maxN: number; readonly threads?: number }, budgetBytes = PAGE_MEMORY_BUDGET_BYTES): void {
+export function pageMemoryCheck(input: Pick<MemoryEstimateInput, 'symbols' | 'alphabetSize' | 'maxN' | 'threads' | 'symbolsShared'>, budgetBytes = PAGE_MEMORY_BUDGET_BYTES): void {
   const message = memoryAdviceMessage(adviseMemory(input, budgetBytes), budgetBytes, 'a fixed budget', 'page');
   if (message !== null) throw new RangeError(message);
 }

@@ -3,6 +3,8 @@ import type { SymbolArray } from './sequence';
 
 const MIN_CAPACITY = 1024;
 
+type SymbolArrayType = typeof Uint8Array | typeof Uint16Array | typeof Int32Array;
+
 /**
  * An append-only symbol array that starts as a Uint8Array and widens to Uint16Array, then
  * Int32Array, when an id passes 255, then 65 535, so the result is always the narrowest
@@ -15,17 +17,20 @@ export class GrowableSymbols {
   /** Ids below this fit the current element type. */
   private idLimit = 0x100;
   private readonly maxLength: number;
+  private readonly shared: boolean;
 
   /**
    * @param initialCapacity symbols to allocate at once; pass an upper bound when the input size is
    *   known so that no growth copy is needed (clamped to maxLength).
    * @param maxLength appending more symbols throws ReadError 'too-many-symbols' (default: no limit).
+   * @param shared allocate in SharedArrayBuffers where the host has them (ReaderOptions.sharedMemory)
    */
-  constructor(initialCapacity = MIN_CAPACITY, maxLength = Infinity) {
+  constructor(initialCapacity = MIN_CAPACITY, maxLength = Infinity, shared = false) {
     if (!(initialCapacity >= 0)) throw new RangeError(`initialCapacity must be >= 0, got ${initialCapacity}`);
     if (!(maxLength >= 1)) throw new RangeError(`maxLength must be >= 1, got ${maxLength}`);
     this.maxLength = maxLength;
-    this.data = new Uint8Array(Math.floor(Math.min(initialCapacity, maxLength)));
+    this.shared = shared && typeof SharedArrayBuffer !== 'undefined';
+    this.data = this.allocate(Uint8Array, Math.floor(Math.min(initialCapacity, maxLength)));
   }
 
   /** Appends one symbol id (0 <= id < 2^31). */
@@ -43,12 +48,18 @@ export class GrowableSymbols {
     const { data, length } = this;
     if (length === data.length) return data;
     if (data.length - length <= data.length / 8) return data.subarray(0, length);
+    // A shared buffer stays shared: slice would copy into unshared memory.
+    if (this.shared) {
+      const trimmed = this.allocate(data.constructor as SymbolArrayType, length);
+      trimmed.set(data.subarray(0, length));
+      return trimmed;
+    }
     return data.slice(0, length);
   }
 
   private widen(id: number): void {
     const capacity = this.data.length;
-    const wider: SymbolArray = id < 0x10000 ? new Uint16Array(capacity) : new Int32Array(capacity);
+    const wider: SymbolArray = id < 0x10000 ? this.allocate(Uint16Array, capacity) : this.allocate(Int32Array, capacity);
     wider.set(this.data.subarray(0, this.length));
     this.data = wider;
     this.idLimit = id < 0x10000 ? 0x10000 : 2 ** 31;
@@ -59,8 +70,13 @@ export class GrowableSymbols {
       throw new ReadError('too-many-symbols', `the input holds more than maxSymbols = ${this.maxLength} symbols`);
     }
     const capacity = Math.min(Math.max(this.data.length * 2, MIN_CAPACITY), this.maxLength);
-    const bigger = new (this.data.constructor as new (n: number) => SymbolArray)(capacity);
+    const bigger = this.allocate(this.data.constructor as SymbolArrayType, capacity);
     bigger.set(this.data);
     this.data = bigger;
+  }
+
+  private allocate(type: SymbolArrayType, length: number): SymbolArray {
+    const bytes = length * type.BYTES_PER_ELEMENT;
+    return new (type as new (b: ArrayBufferLike) => SymbolArray)(this.shared ? new SharedArrayBuffer(bytes) : new ArrayBuffer(bytes));
   }
 }

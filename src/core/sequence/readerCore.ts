@@ -25,10 +25,11 @@ export abstract class ReaderCore implements SequenceReader {
   protected constructor(options: ReaderOptions, minBytesPerSymbol: number) {
     const max = options.maxSymbols ?? Infinity;
     const hint = options.sizeHint;
+    const shared = options.sharedMemory === true;
     this.symbols =
       hint === undefined
-        ? new GrowableSymbols(undefined, max)
-        : new GrowableSymbols(Math.floor((hint + minBytesPerSymbol - 1) / minBytesPerSymbol), max);
+        ? new GrowableSymbols(undefined, max, shared)
+        : new GrowableSymbols(Math.floor((hint + minBytesPerSymbol - 1) / minBytesPerSymbol), max, shared);
   }
 
   push(chunk: Uint8Array): void {

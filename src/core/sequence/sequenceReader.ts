@@ -42,6 +42,9 @@ export interface ReaderOptions {
   caseFold?: boolean;
   /** Size of the whole input in bytes, if known; used to preallocate the symbol array once. */
   sizeHint?: number;
+  /** Write the symbols into a SharedArrayBuffer (where the host has one), so that the worker threads
+   * of a shared scan read them in place instead of a copy (symbolized series are copied still). */
+  sharedMemory?: boolean;
   /** Refuse inputs with more symbols than this ('too-many-symbols'). Default: no limit. */
   maxSymbols?: number;
   /** numbers, csv: read the input as real numbers and turn them into symbols this way

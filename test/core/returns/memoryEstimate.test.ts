@@ -35,6 +35,8 @@ describe('estimatePeakMemory', () => {
     const chunkedTwo = estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, chunkSize: 1e7, threads: 2, baseBytes: 0 });
     expect(chunkedTwo.symbolsBytes).toBe(2e8);
     expect(chunkedTwo.engineBytes).toBe(2 * 12e7);
+    // symbols read straight into shared memory: no copy for the threads
+    expect(estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, threads: 2, symbolsShared: true, baseBytes: 0 }).symbolsBytes).toBe(1e8);
   });
 
   it('advises the largest chunk (a multiple of 2^16) that fits, or nothing when the symbols alone do not', () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { GrowableSymbols } from '../../../src/core/sequence/growableSymbols';
 import { ReadError } from '../../../src/core/sequence/readError';
+import { createReader } from '../../../src/core/sequence/sequenceReader';
 
 function filled(ids: readonly number[], capacity?: number): GrowableSymbols {
   const g = new GrowableSymbols(capacity);
@@ -51,6 +52,26 @@ describe('GrowableSymbols', () => {
     const viewed = filled(Array.from({ length: 95 }, () => 1), 100).toSymbolArray();
     expect(viewed.length).toBe(95);
     expect(viewed.buffer.byteLength).toBe(100);
+  });
+
+  it('keeps the symbols in shared memory through growth, widening and trimming when asked to', () => {
+    // API contract (ReaderOptions.sharedMemory): worker threads read the array in place.
+    const g = new GrowableSymbols(4, Infinity, true);
+    for (let i = 0; i < 40; i++) g.push(i % 3);
+    expect(g.toSymbolArray().buffer).toBeInstanceOf(SharedArrayBuffer);
+    const wide = new GrowableSymbols(100, Infinity, true);
+    wide.push(1);
+    wide.push(70_000);
+    const trimmed = wide.toSymbolArray();
+    expect(trimmed).toBeInstanceOf(Int32Array);
+    expect(Array.from(trimmed)).toEqual([1, 70_000]);
+    expect(trimmed.buffer).toBeInstanceOf(SharedArrayBuffer);
+    expect(filled([1, 2], 100).toSymbolArray().buffer).toBeInstanceOf(ArrayBuffer);
+    const reader = createReader({ format: 'chars', sharedMemory: true, sizeHint: 6 });
+    reader.push(new TextEncoder().encode('abcab\n'));
+    const read = reader.finish();
+    expect(read.sequence.symbols.buffer).toBeInstanceOf(SharedArrayBuffer);
+    expect(Array.from(read.sequence.symbols)).toEqual([0, 1, 2, 0, 1]);
   });
 
   it('refuses more than maxLength symbols', () => {
