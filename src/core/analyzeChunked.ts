@@ -51,7 +51,6 @@ export function analyzeSequenceChunked(
  * analyzeSequenceChunked with the chunks as jobs for `run` (scanChunkedOn: worker threads in hosts,
  * each taking the next chunk), so that a chunked run uses every core. The result is that of
  * analyzeSequenceChunked: the same chunks, merged the same way.
- * @param onPart hears the count of chunks done after each (levels are only known at the end)
  * @throws RangeError for invalid settings or chunk size
  */
 export async function analyzeSequenceChunkedOn(
@@ -61,10 +60,9 @@ export async function analyzeSequenceChunkedOn(
   chunkSize: number,
   run: ScanRunner,
   hooks: AnalysisHooks = {},
-  onPart?: (done: number, total: number) => void,
 ): Promise<AnalysisResult> {
   const plan = checkedPlan(sequence, settings, chunkSize, hooks);
-  const scan = await scanChunkedOn(sequence.symbols, sequence.alphabet.length, plan, run, onPart === undefined ? undefined : (done) => onPart(done, plan.chunkCount));
+  const scan = await scanChunkedOn(sequence.symbols, sequence.alphabet.length, plan, run);
   return chunkedResult(sequence, scan, plan, input, settings, hooks);
 }
 

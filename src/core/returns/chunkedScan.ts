@@ -242,12 +242,10 @@ function checkPlanLength(symbols: SymbolArray, plan: ChunkPlan): void {
 /**
  * scanChunked with the chunks as jobs for `run` (worker threads in hosts: a free thread takes the
  * next chunk), merged as scanChunked merges them. `symbols` should be shared memory, so that the
- * threads read it without a copy. onPart hears the count of chunks done after each.
+ * threads read it without a copy.
  */
-export async function scanChunkedOn(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, run: ScanRunner, onPart?: (done: number) => void): Promise<ReturnScan> {
+export async function scanChunkedOn(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, run: ScanRunner): Promise<ReturnScan> {
   checkPlanLength(symbols, plan);
   const jobs: ScanJob[] = Array.from({ length: plan.chunkCount }, (_, index) => ({ kind: 'chunk', task: { symbols, alphabetSize, plan, index } }));
-  let done = 0;
-  const parts = (await run(jobs, onPart === undefined ? undefined : () => onPart(++done))) as ScanPart[];
-  return mergeScanParts(parts);
+  return mergeScanParts((await run(jobs)) as ScanPart[]);
 }
