@@ -5,6 +5,7 @@ import { analyzeSequenceSplit } from '../../src/core/analyzeSplit';
 import { DEFAULT_SETTINGS, type AnalysisSettings } from '../../src/core/result/analysisResult';
 import { inThisThread, type ScanJob, type ScanRunner } from '../../src/core/returns/scanJobs';
 import type { Sequence } from '../../src/core/sequence/sequence';
+import type { ShareProgress } from '../../src/core/returns/scanReturns';
 
 const settings: AnalysisSettings = { ...DEFAULT_SETTINGS, maxN: 14 };
 
@@ -22,12 +23,17 @@ describe('analyzeSequenceSplit', () => {
     // test/core/diagnostics and test/validation.
     const sequence = sequenceOf(stickyChain(40_000, 7));
     const batches: ScanJob['kind'][][] = [];
-    const spy: ScanRunner = (jobs) => {
+    const spy: ScanRunner = (jobs, onDone) => {
       batches.push(jobs.map((j) => j.kind));
-      return inThisThread(jobs);
+      return inThisThread(jobs, onDone);
     };
-    const split = await analyzeSequenceSplit(sequence, input, settings, 2, spy);
+    const shares: ShareProgress[] = [];
+    const split = await analyzeSequenceSplit(sequence, input, settings, 2, spy, { onShares: (p) => shares.push(p) });
     const single = analyzeSequence(sequence, input, settings);
+    // The groups report from 0 done to all done (the diagnostics job is not counted).
+    const groups = batches.find((kinds) => kinds[0] === 'group')!.filter((k) => k === 'group').length;
+    expect(shares.map((p) => p.done)).toEqual(Array.from({ length: groups + 1 }, (_, k) => k));
+    expect(shares.every((p) => p.total === groups && p.firstN === shares[0]!.firstN)).toBe(true);
     const groupBatch = batches.find((kinds) => kinds[0] === 'group');
     expect(groupBatch?.at(-1)).toBe('diagnostics');
     expect(batches.flat().filter((k) => k === 'diagnostics')).toHaveLength(1);
