@@ -1,5 +1,5 @@
 import { expose, releaseProxy } from 'comlink';
-import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, isShared, jobPool, SHARE_FROM_SYMBOLS, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
+import { analyzeSequence, analyzeSequenceSplit, createDigestingReader, isShared, jobPool, SHARE_FROM_SYMBOLS, sharedSymbols, lengthRowOfLevel, longestSegment, pageMemoryCheck } from '../src/core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, JobPool, JobPort, ShareProgress, JobReply, LengthRow, LevelStats, ReadResult, ReaderOptions, Sequence } from '../src/core';
 import { demoScenario } from './demoScenarios';
 import { createRowThrottle } from './rowThrottle';
@@ -142,13 +142,8 @@ async function analyzeOnWorkers(
     };
     return { ...result, warnings: [...result.warnings, note] };
   }
-  const symbols = sequence.symbols;
   // Read into shared memory when the sub-workers were started ahead (earlyPool); else copied there.
-  let shared = symbols;
-  if (!isShared(symbols)) {
-    shared = new (symbols.constructor as new (b: SharedArrayBuffer) => typeof symbols)(new SharedArrayBuffer(symbols.byteLength));
-    shared.set(symbols);
-  }
+  const shared = sharedSymbols(sequence.symbols);
   const pool = early ?? jobPool(Array.from({ length: cores }, subWorkerPort));
   try {
     return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks, pool.close);

@@ -148,7 +148,10 @@ async function analyzeWith(file: string | undefined, values: Values, io: CliIo, 
   const calibrateSeed = numberOption(values, 'calibrate-seed', Number.isSafeInteger, 'a whole number') ?? 1;
   const loaded = await load(file, values, io, early !== null);
   if (loaded.separate !== null && calibrate !== undefined) throw new UsageError('--calibrate works on one sequence, not with --fasta-records separate');
-  if (loaded.separate !== null) return analyzeRecords(loaded, loaded.separate, options, values, io);
+  if (loaded.separate !== null) {
+    early?.pool.close(); // records are analysed one by one on this thread
+    return analyzeRecords(loaded, loaded.separate, options, values, io);
+  }
   const settings = fitMaxN(options, loaded.sequence.symbols.length, values['max-n'] !== undefined);
   const chunk = chunkSizeOption(values);
   const N = loaded.sequence.symbols.length;

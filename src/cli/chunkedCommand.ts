@@ -1,11 +1,11 @@
 import { createHash } from 'node:crypto';
 import { readFile, writeFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
-import { analyzeParts, analyzeSequenceChunked, analyzeSequenceChunkedOn, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk } from '../core';
+import { analyzeParts, analyzeSequenceChunked, analyzeSequenceChunkedOn, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk, sharedSymbols } from '../core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, PartFileContents, ReferenceFacts, Sequence } from '../core';
 import { alphabetSummary } from '../core';
 import { makeFolder } from './makeFolder';
-import { sharedSymbols, startScanThreads } from './scanThreads';
+import { startScanThreads } from './scanThreads';
 import { isPositiveInteger, numberOption } from './options';
 import { OutputError } from './outputStream';
 import type { CliIo } from './runCli';

@@ -1,7 +1,7 @@
 import { statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
-import { analyzeSequenceSplit, isShared, jobPool, SHARE_FROM_SYMBOLS, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence, type SymbolArray } from '../core';
+import { analyzeSequenceSplit, jobPool, SHARE_FROM_SYMBOLS, sharedSymbols, type AnalysisHooks, type AnalysisResult, type AnalysisSettings, type InputSummary, type JobPool, type JobPort, type ScanRunner, type Sequence } from '../core';
 import { isPositiveInteger, numberOption } from './options';
 
 type Values = Record<string, string | boolean | undefined>;
@@ -76,16 +76,6 @@ export function startScanThreads(count: number): JobPool {
     return results;
   };
   return { run, close: pool.close };
-}
-
-/** The symbols in a SharedArrayBuffer, so every thread reads the one copy: as they are when the
- * reader wrote them there (ReaderOptions.sharedMemory), else copied. */
-export function sharedSymbols(symbols: SymbolArray): SymbolArray {
-  if (isShared(symbols)) return symbols;
-  const shared = new SharedArrayBuffer(symbols.byteLength);
-  const copy = new (symbols.constructor as new (b: SharedArrayBuffer) => SymbolArray)(shared);
-  copy.set(symbols);
-  return copy;
 }
 
 /** Worker threads started before the input is read (threadsAhead). */

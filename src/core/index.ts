@@ -157,6 +157,6 @@ export type { ScanGroupTask, ScanGroupResult } from './returns/splitScan';
 export { runScanJob, inThisThread, jobTransfers, resultTransfers } from './returns/scanJobs';
 export type { ScanJob, ScanJobResult, ScanRunner } from './returns/scanJobs';
 export { jobPool, answerJob } from './returns/jobPool';
-export { isShared } from './returns/sharedBuffer';
+export { isShared, sharedSymbols } from './returns/sharedBuffer';
 export type { JobPort, JobPool, JobRequest, JobReply } from './returns/jobPool';
 export { analyzeSequenceSplit } from './analyzeSplit';

@@ -2,7 +2,8 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { scanReturns } from '../../src/core/returns/scanReturns';
 import { scanReturnsSplit } from '../../src/core/returns/splitScan';
-import { sharedSymbols, startScanThreads, threadsAhead } from '../../src/cli/scanThreads';
+import { startScanThreads, threadsAhead } from '../../src/cli/scanThreads';
+import { sharedSymbols } from '../../src/core/returns/sharedBuffer';
 import { writeFileSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { SHARE_FROM_SYMBOLS } from '../../src/core/returns/splitScan';
@@ -80,5 +81,11 @@ describe('scan on worker threads', () => {
     // One thread per core; none on a one-core machine.
     expect(big?.count ?? 1).toBe(availableParallelism() >= 2 ? availableParallelism() : 1);
     expect(() => threadsAhead(small, { threads: '0' })).toThrow('--threads');
+    // Symbols the reader wrote into shared memory are used in place; others are copied there.
+    const plain = Uint8Array.from([0, 1, 1]);
+    const copied = sharedSymbols(plain);
+    expect(copied.buffer).toBeInstanceOf(SharedArrayBuffer);
+    expect(Array.from(copied)).toEqual([0, 1, 1]);
+    expect(sharedSymbols(copied)).toBe(copied);
   });
 });
