@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import { readFile, writeFile } from 'node:fs/promises';
 import { basename, join } from 'node:path';
-import { analyzeParts, analyzeSequenceChunked, analyzeSequenceChunkedOn, chunkBounds, chunkPlan, partFileJson, readPartFile, scanChunk, sharedSymbols } from '../core';
+import { analyzeParts, analyzeSequenceChunked, analyzeSequenceChunkedOn, chunkBounds, chunkPlan, partFileJson, readPartFile, reserveScanWorkspace, scanChunk, sharedSymbols } from '../core';
 import type { AnalysisHooks, AnalysisResult, AnalysisSettings, InputSummary, PartFileContents, ReferenceFacts, Sequence } from '../core';
 import { alphabetSummary } from '../core';
 import { makeFolder } from './makeFolder';
@@ -66,10 +66,12 @@ export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSetti
     alphabetUnlisted: listed.unlisted,
   };
   const indices = partOption === undefined ? Array.from({ length: plan.chunkCount }, (_, k) => k) : [partOption];
+  const workspace = {}; // one set of working arrays for every part (ScanWorkspace), sized for the longest
+  reserveScanWorkspace(workspace, Math.max(...indices.map((k) => chunkBounds(plan, k).length)), sequence.alphabet.length);
   for (const k of indices) {
     const { offset, length } = chunkBounds(plan, k);
     const symbols = sequence.symbols.subarray(offset, offset + length);
-    const part = scanChunk(symbols, sequence.alphabet.length, plan, k);
+    const part = scanChunk(symbols, sequence.alphabet.length, plan, k, { workspace });
     const path = join(dir, partFileName(loaded.input.name, k, plan.chunkCount));
     await writeFile(path, partFileJson(part, { input, settings, chunkSha256: chunkDigest(symbols) }));
     io.stderr.write(`returnrate: wrote ${path} (part ${k} of 0 to ${plan.chunkCount - 1})\n`);
@@ -80,7 +82,7 @@ export async function chunkedAnalyze(loaded: ChunkInput, settings: AnalysisSetti
 async function chunksOnThreads(loaded: ChunkInput, settings: AnalysisSettings, size: number, threads: number, hooks: AnalysisHooks): Promise<AnalysisResult> {
   const pool = startScanThreads(threads);
   try {
-    return await analyzeSequenceChunkedOn({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, size, pool.run, hooks);
+    return await analyzeSequenceChunkedOn({ ...loaded.sequence, symbols: sharedSymbols(loaded.sequence.symbols) }, loaded.input, settings, size, threads, pool.run, hooks);
   } finally {
     pool.close();
   }

@@ -58,11 +58,12 @@ export async function analyzeSequenceChunkedOn(
   input: Omit<InputSummary, 'symbols' | 'alphabetSize'>,
   settings: AnalysisSettings,
   chunkSize: number,
+  threads: number,
   run: ScanRunner,
   hooks: AnalysisHooks = {},
 ): Promise<AnalysisResult> {
   const plan = checkedPlan(sequence, settings, chunkSize, hooks);
-  const scan = await scanChunkedOn(sequence.symbols, sequence.alphabet.length, plan, run);
+  const scan = await scanChunkedOn(sequence.symbols, sequence.alphabet.length, plan, threads, run);
   return chunkedResult(sequence, scan, plan, input, settings, hooks);
 }
 

@@ -35,7 +35,7 @@ export { downsampleMinMax } from './symbolize/downsampleMinMax';
 export type { DownsampledSeries } from './symbolize/downsampleMinMax';
 
 // The return-time engine
-export { scanReturns, ScanCancelled } from './returns/scanReturns';
+export { reserveScanWorkspace, scanReturns, ScanCancelled } from './returns/scanReturns';
 export type { ScanOptions, ShareProgress } from './returns/scanReturns';
 export type { LevelStats, ReturnScan, SampledPaths } from './returns/levelStats';
 export { HISTOGRAM_BINS_PER_NAT } from './returns/levelStats';

@@ -167,18 +167,22 @@ export const NUMERIC_BAD_INPUTS: readonly BadInput[] = [
     id: 'memory-over-budget', title: 'a file larger than the memory budget allows in one scan', fileName: 'long.txt', bytes: () => twoSymbolLine(300_000), stage: 'memory', reader: { format: 'chars' }, settings: { maxN: 8 },
     // By hand from returns/memoryEstimate.ts: 3e5 symbols of 1 byte + 12 bytes of engine arrays each
     // (3,600,000) + 8 levels of (809 histogram bins + 8 x 147 batches) x 8 bytes + 256 x 8 x 16 of paths
-    // + 2 x 96 + 64 MiB = 71,168,864 bytes. Budget 66 MiB = 69,206,016: the spare 1,637,152 bytes take
-    // floor(1,637,152 / 12 / 65536) = 2 steps of 2^16 positions, a chunk of 131072 (about 69.1 MB).
+    // + 2 x 96 + 64 MiB = 71,168,864 bytes. Budget 66 MiB = 69,206,016. A chunked run holds the level
+    // sums twice (the running merge and a part): 67,695,904 bytes besides its arrays, which hold the
+    // longest chunk (the last takes the remainder). Chunks of 131072 (batch grid 2048): 2 of them,
+    // the last 168,928 positions, 69,723,040 bytes in all, too many; chunks of 65536: 4, the last
+    // 103,392 positions, 68,936,608 bytes (about 69 MB), which fits.
     memoryBudgetBytes: 66 * 2 ** 20,
-    expect: { outcome: 'refused', message: /^this run needs about 71 MB of memory, more than the page's 69 MB \(a fixed budget\); the command line can run it in chunks \(returnrate analyze FILE --chunk 131072\)$/, position: 'whole-input' },
-    cli: { args: ['analyze', 'FILE', '--format', 'chars', '--max-n', '8', '--max-memory', '66M'], exit: 1, stderr: /this run needs about 71 MB but 69 MB are available \(--max-memory\); a chunked run fits: --chunk 131072 \(about 69 MB; returns are then censored at chunk ends\)$/ },
+    expect: { outcome: 'refused', message: /^this run needs about 71 MB of memory, more than the page's 69 MB \(a fixed budget\); the command line can run it in chunks \(returnrate analyze FILE --chunk 65536\)$/, position: 'whole-input' },
+    cli: { args: ['analyze', 'FILE', '--format', 'chars', '--max-n', '8', '--max-memory', '66M'], exit: 1, stderr: /this run needs about 71 MB but 69 MB are available \(--max-memory\); a chunked run fits: --chunk 65536 \(about 69 MB; returns are then censored at chunk ends\)$/ },
   },
   {
     id: 'memory-no-room', title: 'a budget below what the program and the symbols need', fileName: 'long.txt', bytes: () => twoSymbolLine(300_000), stage: 'memory', reader: { format: 'chars' }, settings: { maxN: 8 },
-    // Budget 64 MiB = 67,108,864, below the 67,568,864 bytes that are not engine arrays; the smallest
-    // chunk, 2^16 positions, needs 67,568,864 + 786,432 = 68,355,296 bytes.
+    // Budget 64 MiB = 67,108,864, below the 67,695,904 bytes a chunked run needs besides its arrays;
+    // the smallest chunk, 2^16 positions (the last of 4 holds 103,392), needs 67,695,904 + 1,240,704
+    // = 68,936,608 bytes.
     memoryBudgetBytes: 64 * 2 ** 20,
-    expect: { outcome: 'refused', message: /^this run needs about 71 MB of memory, more than the page's 67 MB \(a fixed budget\); the command line can run it where it has about 68 MB, the smallest chunked run \(--chunk 65536\)$/, position: 'whole-input' },
-    cli: { args: ['analyze', 'FILE', '--format', 'chars', '--max-n', '8', '--max-memory', '64M'], exit: 1, stderr: /71 MB but 67 MB are available \(--max-memory\); the program and the symbols alone leave no room for a scan: it needs at least about 68 MB, the smallest chunked run \(--chunk 65536\)$/ },
+    expect: { outcome: 'refused', message: /^this run needs about 71 MB of memory, more than the page's 67 MB \(a fixed budget\); the command line can run it where it has about 69 MB, the smallest chunked run \(--chunk 65536\)$/, position: 'whole-input' },
+    cli: { args: ['analyze', 'FILE', '--format', 'chars', '--max-n', '8', '--max-memory', '64M'], exit: 1, stderr: /71 MB but 67 MB are available \(--max-memory\); the program and the symbols alone leave no room for a scan: it needs at least about 69 MB, the smallest chunked run \(--chunk 65536\)$/ },
   },
 ];

@@ -2,7 +2,7 @@ import type { SymbolArray } from '../sequence/sequence';
 import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
 import { mergeLevelStats, mergeSampledPaths } from './mergeLevels';
 import { matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
-import { scanReturns } from './scanReturns';
+import { reserveScanWorkspace, scanReturns, type ScanWorkspace } from './scanReturns';
 import type { ScanJob, ScanRunner } from './scanJobs';
 
 /**
@@ -62,6 +62,11 @@ export function chunkPlan(N: number, requestedSize: number, maxN: number, sample
   };
 }
 
+/** Length of the longest chunk: the last, which takes the remainder of N. */
+export function largestChunk(plan: ChunkPlan): number {
+  return chunkBounds(plan, plan.chunkCount - 1).length;
+}
+
 /** First position and length of chunk `index`. */
 export function chunkBounds(plan: ChunkPlan, index: number): { offset: number; length: number } {
   if (!Number.isInteger(index) || index < 0 || index >= plan.chunkCount) {
@@ -96,6 +101,8 @@ export interface ScanPart {
 export interface ChunkHooks {
   readonly onLevel?: (level: LevelStats, active: number) => void;
   readonly shouldStop?: () => boolean;
+  /** Working arrays kept from one chunk's scan to the next (ScanWorkspace). */
+  readonly workspace?: ScanWorkspace;
 }
 
 /**
@@ -128,6 +135,7 @@ export function scanChunk(
     matchWindow: plan.matchWindow,
     ...(hooks.onLevel === undefined ? {} : { onLevel: hooks.onLevel }),
     ...(hooks.shouldStop === undefined ? {} : { shouldStop: hooks.shouldStop }),
+    ...(hooks.workspace === undefined ? {} : { workspace: hooks.workspace }),
   });
   const firstBatch = offset / plan.batchLength;
   const levels = scan.levels.map((level) => {
@@ -204,20 +212,48 @@ export function mergeScanParts(parts: readonly ScanPart[]): ReturnScan {
   const missing: number[] = [];
   for (let k = 0; k < plan.chunkCount; k++) if (!seen.has(k)) missing.push(k);
   if (missing.length > 0) throw new RangeError(`parts missing: ${missing.join(', ')} (of 0 to ${plan.chunkCount - 1})`);
-  const ordered = [...parts].sort((a, b) => a.index - b.index);
-  const levels = ordered[0].levels.map((first, j) => ordered.slice(1).reduce((acc, part) => mergeLevelStats(acc, part.levels[j]), first));
+  const merger = partMerger(plan);
+  for (const part of [...parts].sort((a, b) => a.index - b.index)) merger.add(part);
+  return merger.finish();
+}
+
+/**
+ * Parts of one plan merged as they come, in part order (0, 1, ...): the levels are added in the
+ * same order as mergeScanParts adds them, so the result is the same to the last bit, while only the
+ * running sums are kept (a part's levels span the whole batch grid: about 0.75 MB at 10^9 symbols
+ * and maxN 40, so a run of a thousand chunks would otherwise hold 750 MB of them).
+ */
+export function partMerger(plan: ChunkPlan): { add(part: ScanPart): void; finish(): ReturnScan } {
+  let levels: LevelStats[] | null = null;
+  let alphabetSize = 0;
+  let matchPositions = 0;
+  let exhausted = true;
+  const paths: SampledPaths[] = [];
   return {
-    length: plan.length,
-    alphabetSize: ordered[0].alphabetSize,
-    maxN: plan.maxN,
-    levels,
-    batchLength: plan.batchLength,
-    batchCount: plan.batchCount,
-    matchWindow: plan.matchWindow,
-    matchPositions: ordered.reduce((s, p) => s + p.matchPositions, 0),
-    paths: mergeSampledPaths(ordered.map((p) => p.paths)),
-    exhausted: ordered.every((p) => p.exhausted),
-    captured: null,
+    add(part) {
+      if (part.index !== paths.length) throw new RangeError(`part ${part.index} came where part ${paths.length} was due`);
+      alphabetSize = part.alphabetSize;
+      levels = levels === null ? [...part.levels] : levels.map((acc, j) => mergeLevelStats(acc, part.levels[j]));
+      matchPositions += part.matchPositions;
+      exhausted &&= part.exhausted;
+      paths.push(part.paths);
+    },
+    finish() {
+      if (levels === null || paths.length !== plan.chunkCount) throw new RangeError(`${paths.length} of ${plan.chunkCount} parts were merged`);
+      return {
+        length: plan.length,
+        alphabetSize,
+        maxN: plan.maxN,
+        levels,
+        batchLength: plan.batchLength,
+        batchCount: plan.batchCount,
+        matchWindow: plan.matchWindow,
+        matchPositions,
+        paths: mergeSampledPaths(paths),
+        exhausted,
+        captured: null,
+      };
+    },
   };
 }
 
@@ -227,25 +263,38 @@ export function mergeScanParts(parts: readonly ScanPart[]): ReturnScan {
  */
 export function scanChunked(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, hooks: ChunkHooks = {}): ReturnScan {
   checkPlanLength(symbols, plan);
-  const parts: ScanPart[] = [];
+  const merger = partMerger(plan);
+  const withSpace = { ...hooks, workspace: hooks.workspace ?? {} };
+  reserveScanWorkspace(withSpace.workspace, largestChunk(plan), alphabetSize);
   for (let k = 0; k < plan.chunkCount; k++) {
     const { offset, length } = chunkBounds(plan, k);
-    parts.push(scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, k, hooks));
+    merger.add(scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, k, withSpace));
   }
-  return mergeScanParts(parts);
+  return merger.finish();
 }
 
 function checkPlanLength(symbols: SymbolArray, plan: ChunkPlan): void {
   if (symbols.length !== plan.length) throw new RangeError(`the plan is for ${plan.length} symbols; got ${symbols.length}`);
 }
 
+/** Chunk jobs per thread in one batch of scanChunkedOn: enough that a thread whose chunks ran short
+ * takes another while the rest finish, few enough that the parts waiting for the merge stay few. */
+export const CHUNKS_PER_THREAD = 4;
+
 /**
  * scanChunked with the chunks as jobs for `run` (worker threads in hosts: a free thread takes the
- * next chunk), merged as scanChunked merges them. `symbols` should be shared memory, so that the
- * threads read it without a copy.
+ * next chunk), merged as scanChunked merges them, in batches of CHUNKS_PER_THREAD chunks per thread
+ * so that the parts held at once stay few. `symbols` should be shared memory, so that the threads
+ * read it without a copy.
  */
-export async function scanChunkedOn(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, run: ScanRunner): Promise<ReturnScan> {
+export async function scanChunkedOn(symbols: SymbolArray, alphabetSize: number, plan: ChunkPlan, threads: number, run: ScanRunner): Promise<ReturnScan> {
   checkPlanLength(symbols, plan);
-  const jobs: ScanJob[] = Array.from({ length: plan.chunkCount }, (_, index) => ({ kind: 'chunk', task: { symbols, alphabetSize, plan, index } }));
-  return mergeScanParts((await run(jobs)) as ScanPart[]);
+  const merger = partMerger(plan);
+  const batch = CHUNKS_PER_THREAD * Math.max(1, threads);
+  for (let from = 0; from < plan.chunkCount; from += batch) {
+    const jobs: ScanJob[] = [];
+    for (let index = from; index < Math.min(plan.chunkCount, from + batch); index++) jobs.push({ kind: 'chunk', task: { symbols, alphabetSize, plan, index } });
+    for (const part of (await run(jobs)) as ScanPart[]) merger.add(part);
+  }
+  return merger.finish();
 }

@@ -1,3 +1,4 @@
+import { chunkPlan, CHUNKS_PER_THREAD, largestChunk } from './chunkedScan';
 import { histogramBinCount, powerOfTwoAtLeast } from './scanLayout';
 
 /** What the peak memory of a run depends on. */
@@ -64,7 +65,9 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   if (!Number.isInteger(alphabetSize) || alphabetSize < 1) throw new RangeError(`alphabetSize must be a positive whole number; got ${alphabetSize}`);
   const threads = input.threads ?? 1;
   if (!Number.isInteger(threads) || threads < 1) throw new RangeError(`threads must be a whole number >= 1; got ${threads}`);
-  const scanned = Math.min(N, input.chunkSize ?? N);
+  // A chunked run's arrays hold its longest chunk (the last takes the remainder; chunkPlan).
+  const chunked = input.chunkSize !== undefined && input.chunkSize !== null && input.chunkSize < N && input.chunkSize > maxN;
+  const scanned = chunked ? largestChunk(chunkPlan(N, input.chunkSize!, maxN)) : N;
   // Threads (splitScan.ts): the symbols are copied once into shared memory unless the reader wrote
   // them there; the range passes leave
   // the carried words of every position and each range's layout of the positions in play (positions
@@ -74,7 +77,7 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   // within 12% of the peak for a fair coin (1e6 to 1e9) and an uneven Markov chain (DEVELOPERS.md,
   // Scale); with half, the coin at 1e9 came out 23% over.
   // Chunked runs on threads: each thread scans one chunk at a time, as a run of one thread does.
-  const split = threads > 1 && scanned === N;
+  const split = threads > 1 && !chunked;
   const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (threads > 1 && input.symbolsShared !== true ? 2 : 1);
   const wordBytes = alphabetSize <= 0x100 ? 2 : 0;
   const engineBytes = split
@@ -83,7 +86,10 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const batchCount = Math.ceil(N / powerOfTwoAtLeast(Math.ceil(N / 256)));
   const levelBytes = (histogramBinCount(N) + 2 * 4 * batchCount) * 8;
   const pathBytes = 256 * maxN * 16;
-  const smallBytes = maxN * levelBytes * threads + pathBytes + alphabetSize * BYTES_PER_ALPHABET_SYMBOL + (threads > 1 ? threads * THREAD_BYTES : 0);
+  // Level sums held at once: one scan's per thread; a chunked run keeps the running merge and the
+  // parts of one batch (scanChunkedOn: CHUNKS_PER_THREAD per thread), or one part on one thread.
+  const heldLevels = chunked ? 1 + (threads > 1 ? CHUNKS_PER_THREAD * threads : 1) : threads;
+  const smallBytes = maxN * levelBytes * heldLevels + pathBytes + alphabetSize * BYTES_PER_ALPHABET_SYMBOL + (threads > 1 ? threads * THREAD_BYTES : 0);
   const baseBytes = input.baseBytes ?? DEFAULT_BASE_BYTES;
   return { totalBytes: symbolsBytes + engineBytes + smallBytes + baseBytes, symbolsBytes, engineBytes, smallBytes, baseBytes };
 }
@@ -108,11 +114,17 @@ export type MemoryAdvice =
 export function adviseMemory(input: MemoryEstimateInput, budgetBytes: number): MemoryAdvice {
   const estimate = estimatePeakMemory(input);
   if (estimate.totalBytes <= budgetBytes) return { kind: 'fits', estimate };
-  const spare = budgetBytes - (estimate.totalBytes - estimate.engineBytes);
-  const perPosition = engineBytesPerPosition(input.alphabetSize);
   const step = 1 << 16;
-  const chunkSize = Math.floor(spare / perPosition / step) * step;
   const smallest = Math.max(step, 4 * input.maxN);
+  // What a chunked run needs besides its chunk's arrays does not depend on the chunk's size.
+  const chunked = estimatePeakMemory({ ...input, chunkSize: smallest });
+  const spare = budgetBytes - (chunked.totalBytes - chunked.engineBytes);
+  // Each thread of a chunked run holds one chunk's arrays, for the longest chunk (up to twice the
+  // size: the last takes the remainder), so the bound from the spare memory is walked down until
+  // the run fits.
+  const perPosition = engineBytesPerPosition(input.alphabetSize) * (input.threads ?? 1);
+  let chunkSize = Math.floor(spare / perPosition / step) * step;
+  while (chunkSize >= smallest && estimatePeakMemory({ ...input, chunkSize }).totalBytes > budgetBytes) chunkSize -= step;
   if (chunkSize < smallest) return { kind: 'too-large', estimate, smallestChunkSize: smallest, smallestChunkEstimate: estimatePeakMemory({ ...input, chunkSize: smallest }) };
   return { kind: 'chunk', estimate, chunkSize, chunkEstimate: estimatePeakMemory({ ...input, chunkSize }) };
 }

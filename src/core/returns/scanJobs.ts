@@ -2,7 +2,8 @@ import type { SymbolArray } from '../sequence/sequence';
 import { countPrefixes, scanPrefixLevels, type PrefixCountResult, type PrefixCountTask, type PrefixLevelsResult, type PrefixLevelsTask } from './prefixLevels';
 import { scanGroup, type ScanGroupResult, type ScanGroupTask } from './splitScan';
 import { scanFreeDiagnostics, type ScanFreeDiagnostics } from '../diagnostics/mixingDiagnostics';
-import { chunkBounds, scanChunk, type ChunkPlan, type ScanPart } from './chunkedScan';
+import { chunkBounds, largestChunk, scanChunk, type ChunkPlan, type ScanPart } from './chunkedScan';
+import { reserveScanWorkspace, type ScanWorkspace } from './scanReturns';
 
 /** The sequence whose scan-free diagnostics a thread computes beside the scan's class groups. */
 export interface DiagnosticsTask {
@@ -47,10 +48,16 @@ export function runScanJob(job: ScanJob): ScanJobResult {
     case 'chunk': {
       const { symbols, alphabetSize, plan, index } = job.task;
       const { offset, length } = chunkBounds(plan, index);
-      return scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, index);
+      // Sized for the longest chunk from the first, so that no thread replaces its arrays later on.
+      reserveScanWorkspace(chunkWorkspace, largestChunk(plan), alphabetSize);
+      return scanChunk(symbols.subarray(offset, offset + length), alphabetSize, plan, index, { workspace: chunkWorkspace });
     }
   }
 }
+
+/** This thread's working arrays for the chunks it scans, one after another (ScanWorkspace); a worker
+ * thread frees them when it ends with its run. */
+const chunkWorkspace: ScanWorkspace = {};
 
 /** A runner that runs every job here, one after the other. */
 export const inThisThread: ScanRunner = (jobs, onDone) =>

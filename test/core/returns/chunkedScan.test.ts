@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { chunkBounds, chunkPlan, mergedPositions, mergeScanParts, scanChunk, scanChunked, scanChunkedOn } from '../../../src/core/returns/chunkedScan';
+import { CHUNKS_PER_THREAD, chunkBounds, chunkPlan, mergedPositions, mergeScanParts, partMerger, scanChunk, scanChunked, scanChunkedOn } from '../../../src/core/returns/chunkedScan';
 import { inThisThread, type ScanRunner } from '../../../src/core/returns/scanJobs';
 import type { LevelStats, ReturnScan } from '../../../src/core/returns/levelStats';
 import { mergeLevelStats } from '../../../src/core/returns/mergeLevels';
@@ -172,15 +172,25 @@ describe('scanChunked', () => {
   it('scanChunkedOn runs every chunk as a job and merges them exactly as scanChunked', async () => {
     // The oracle is scanChunked (brute-force checked above); same chunks, same merge: equal to the bit.
     const x = randomSymbols(9000, 3, 17);
-    const plan = chunkPlan(x.length, 2000, 8);
-    const kinds: string[] = [];
+    const plan = chunkPlan(x.length, 600, 8);
+    const batches: string[][] = [];
     const run: ScanRunner = (jobs) => {
-      kinds.push(...jobs.map((j) => j.kind));
+      batches.push(jobs.map((j) => j.kind));
       return inThisThread(jobs);
     };
-    const shared = await scanChunkedOn(x, 3, plan, run);
+    const shared = await scanChunkedOn(x, 3, plan, 1, run);
     expect(shared).toEqual(scanChunked(x, 3, plan));
-    expect(kinds).toEqual(Array.from({ length: plan.chunkCount }, () => 'chunk'));
+    // Batches of CHUNKS_PER_THREAD chunks per thread, merged as they come.
+    expect(batches.flat()).toEqual(Array.from({ length: plan.chunkCount }, () => 'chunk'));
+    expect(batches.length).toBe(Math.ceil(plan.chunkCount / CHUNKS_PER_THREAD));
+    // The merge of all parts at once agrees to the bit; a part out of order is refused.
+    const parts = Array.from({ length: plan.chunkCount }, (_, k) => {
+      const { offset, length } = chunkBounds(plan, k);
+      return scanChunk(x.subarray(offset, offset + length), 3, plan, k);
+    });
+    expect(mergeScanParts([...parts].reverse())).toEqual(shared);
+    const merger = partMerger(plan);
+    expect(() => merger.add(parts[1]!)).toThrow('part 1 came where part 0 was due');
   });
 
   it('merges parts given in any order, and refuses a missing, repeated or foreign part', () => {

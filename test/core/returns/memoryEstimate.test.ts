@@ -21,9 +21,13 @@ describe('estimatePeakMemory', () => {
     // per level: histogram floor(64 ln 1e8) + 2 = 1180 bins, 2 x 4 arrays of ceil(1e8 / 2^19) = 191 batches
     expect(e.smallBytes).toBe(40 * (1180 + 8 * 191) * 8 + 256 * 40 * 16 + 2 * 96);
     expect(e.totalBytes / 1e8).toBeCloseTo(13.0, 1);
+    // chunks of 1e7 rounded up to the batch grid (2^19): 10,485,760 each, 9 of them, the last taking
+    // the remainder 1e8 - 8 x 10,485,760 = 16,113,920; the arrays hold that longest chunk
     const chunked = estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, chunkSize: 1e7, baseBytes: 0 });
-    expect(chunked.engineBytes).toBe(12e7);
+    expect(chunked.engineBytes).toBe(12 * 16_113_920);
     expect(chunked.symbolsBytes).toBe(1e8);
+    // the running merge and one part of level sums instead of one scan's
+    expect(chunked.smallBytes - e.smallBytes).toBe(40 * (1180 + 8 * 191) * 8);
     // two threads: a shared copy of the symbols; shared carried words (2 bytes) and the ranges'
     // layout (4 + 2 bytes) per position; 3/8 of one scan's arrays (12 * 3/8 bytes) in the threads;
     // and a 16 MiB V8 instance per thread
@@ -34,9 +38,19 @@ describe('estimatePeakMemory', () => {
     // a chunked run on two threads: the shared copy, and one chunk's scan (12 bytes a position) per thread
     const chunkedTwo = estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, chunkSize: 1e7, threads: 2, baseBytes: 0 });
     expect(chunkedTwo.symbolsBytes).toBe(2e8);
-    expect(chunkedTwo.engineBytes).toBe(2 * 12e7);
+    expect(chunkedTwo.engineBytes).toBe(2 * 12 * 16_113_920);
     // symbols read straight into shared memory: no copy for the threads
     expect(estimatePeakMemory({ symbols: 1e8, alphabetSize: 2, maxN: 40, threads: 2, symbolsShared: true, baseBytes: 0 }).symbolsBytes).toBe(1e8);
+  });
+
+  it('advises a chunk that fits when every thread holds one', () => {
+    // API contract (adviseMemory): the chunked run on two threads stays within the budget.
+    const input = { symbols: 1e8, alphabetSize: 2, maxN: 40, threads: 2 };
+    const advice = adviseMemory(input, 1e9);
+    expect(advice.kind).toBe('chunk');
+    if (advice.kind !== 'chunk') return;
+    expect(advice.chunkEstimate.totalBytes).toBeLessThanOrEqual(1e9);
+    expect(estimatePeakMemory({ ...input, chunkSize: advice.chunkSize + 65536 }).totalBytes).toBeGreaterThan(1e9);
   });
 
   it('advises the largest chunk (a multiple of 2^16) that fits, or nothing when the symbols alone do not', () => {
