@@ -69,13 +69,12 @@ export function estimatePeakMemory(input: MemoryEstimateInput): MemoryEstimate {
   const chunked = input.chunkSize !== undefined && input.chunkSize !== null && input.chunkSize < N && input.chunkSize > maxN;
   const scanned = chunked ? largestChunk(chunkPlan(N, input.chunkSize!, maxN)) : N;
   // Threads (splitScan.ts): the symbols are copied once into shared memory unless the reader wrote
-  // them there; the range passes leave
-  // the carried words of every position and each range's layout of the positions in play (positions
-  // and words) in shared memory until the scan ends; each thread then keeps the working arrays of its
-  // largest class group. With no class above 1/threads of the positions, those hold between a quarter
-  // of one scan's arrays (even classes, a fair coin) and all of them; 3/8 is taken, which measured
-  // within 12% of the peak for a fair coin (1e6 to 1e9) and an uneven Markov chain (DEVELOPERS.md,
-  // Scale); with half, the coin at 1e9 came out 23% over.
+  // them there; the range passes leave the carried words of every position and each range's layout
+  // of the positions in play (positions and words) in shared memory until the scan ends; each thread
+  // then keeps the working arrays of its largest class group. With no class above 1/threads of the
+  // positions, those hold between a quarter of one scan's arrays (even classes, a fair coin) and all
+  // of them; 3/8 is taken, which measured within 15% of the peak for a fair coin (1e6 to 1e9) and an
+  // uneven Markov chain (DEVELOPERS.md, Scale); with half, the coin at 1e9 came out 23% over.
   // Chunked runs on threads: each thread scans one chunk at a time, as a run of one thread does.
   const split = threads > 1 && !chunked;
   const symbolsBytes = N * bytesPerSymbolId(alphabetSize) * (threads > 1 && input.symbolsShared !== true ? 2 : 1);
