@@ -1,4 +1,5 @@
 import type { SymbolArray } from '../sequence/sequence';
+import { wordLayout } from './packedWords';
 
 /** Buffers of the class refinement, owned by one scan and reused across levels. */
 export interface RefinementBuffers {
@@ -11,6 +12,20 @@ export interface RefinementBuffers {
   readonly touched: Int32Array;
   /** Symbol of each entry at the current offset, when not packed. */
   readonly scratch: SymbolArray;
+}
+
+/** The refinement's buffers for `symbols`: per-symbol counters, and `scratch` (the symbol of each
+ * entry, needed only when symbols are not packed into carried words). */
+export function refinementBuffers(symbols: SymbolArray, alphabetSize: number, scratch: SymbolArray): RefinementBuffers {
+  const { bits, packed } = wordLayout(alphabetSize);
+  return {
+    symbols,
+    packed,
+    symbolMask: (1 << bits) - 1,
+    counts: new Int32Array(alphabetSize),
+    touched: new Int32Array(Math.min(alphabetSize, symbols.length) + 1),
+    scratch,
+  };
 }
 
 /** What one partition pass reports besides the new order. */

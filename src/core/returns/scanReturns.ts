@@ -3,7 +3,7 @@ import { collectReturns, type LevelSums, type ReturnGeometry } from './collectRe
 import type { LevelStats, ReturnScan, SampledPaths } from './levelStats';
 import { wordLayout } from './packedWords';
 import { partitionBinaryLevel } from './partitionBinaryLevel';
-import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
+import { partitionLevel, refinementBuffers, ScanCancelled, type SampleSink } from './partitionLevel';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
 
 export { ScanCancelled } from './partitionLevel';
@@ -67,11 +67,12 @@ export interface ScanWorkspace {
  * otherwise replace the arrays near the end and leave the old ones to the collector).
  */
 export function reserveScanWorkspace(space: ScanWorkspace, length: number, alphabetSize: number): void {
-  workArrays(space, length, wordLayout(alphabetSize).packed, alphabetSize);
+  scanWorkArrays(space, length, alphabetSize);
 }
 
 /** Views of `length` entries of the workspace's arrays, replaced by new ones when too short. */
-function workArrays(space: ScanWorkspace, length: number, packed: boolean, alphabetSize: number): Required<ScanWorkspace> {
+export function scanWorkArrays(space: ScanWorkspace, length: number, alphabetSize: number): Required<ScanWorkspace> {
+  const { packed } = wordLayout(alphabetSize);
   const wordLength = packed ? length : 0;
   const scratchLength = packed ? 0 : length;
   if ((space.order?.length ?? -1) < length) {
@@ -153,19 +154,11 @@ export function scanReturns(symbols: SymbolArray, alphabetSize: number, options:
   // read of the carried word on all other levels.
   const { bits, perWord, packed } = wordLayout(alphabetSize);
   const binary = alphabetSize === 2;
-  const work = workArrays(options.workspace ?? {}, N, packed, alphabetSize);
+  const work = scanWorkArrays(options.workspace ?? {}, N, alphabetSize);
   let { order, next, words, nextWords } = work;
   for (let i = 0; i < N; i++) order[i] = i;
   if (N > 0) order[0] = ~0;
-  const distinctMax = Math.min(alphabetSize, N) + 1;
-  const buffers: RefinementBuffers = {
-    symbols,
-    packed,
-    symbolMask: (1 << bits) - 1,
-    counts: new Int32Array(alphabetSize),
-    touched: new Int32Array(distinctMax),
-    scratch: work.scratch,
-  };
+  const buffers = refinementBuffers(symbols, alphabetSize, work.scratch);
   const sample: SampleSink = { mask: stride - 1, shift: strideShift, maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift, matchWindow, matchEnd };
   let activeLength = N;

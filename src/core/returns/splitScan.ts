@@ -4,12 +4,12 @@ import { collectReturns, type LevelSums, type ReturnGeometry } from './collectRe
 import type { LevelStats, ReturnScan } from './levelStats';
 import { wordLayout } from './packedWords';
 import { partitionBinaryLevel } from './partitionBinaryLevel';
-import { partitionLevel, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
+import { partitionLevel, refinementBuffers, ScanCancelled, type RefinementBuffers, type SampleSink } from './partitionLevel';
 import { assembleOrder, classSlices, gatherSlices, prefixByRanges } from './prefixByRanges';
 import { sharedBuffer } from './sharedBuffer';
 import type { ScanJob, ScanRunner } from './scanJobs';
 import { histogramBinCount, matchWindowFor, powerOfTwoAtLeast } from './scanLayout';
-import { completePaths, emptySums, levelFromSums, mergeWrittenPaths, scanReturns, type ScanOptions, type WrittenPaths } from './scanReturns';
+import { completePaths, emptySums, levelFromSums, mergeWrittenPaths, scanReturns, scanWorkArrays, type ScanOptions, type ScanWorkspace, type WrittenPaths } from './scanReturns';
 
 /**
  * The classes of one share of the work after the split, and what is needed to refine them alone.
@@ -66,10 +66,9 @@ const JOBS_PER_GROUP = 4;
  * statistics passes as scanReturns. The group's classes are independent of all others: a class
  * only ever splits into subclasses of itself, so no communication is needed.
  */
-export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): ScanGroupResult {
+export function scanGroup(task: ScanGroupTask, workspace: ScanWorkspace = {}): ScanGroupResult {
   const { symbols, alphabetSize, firstN, maxN, batchLength, batchCount, stride, matchWindow, words: allWords } = task;
   const N = symbols.length;
-  const { bits, packed } = wordLayout(alphabetSize);
   const bins = histogramBinCount(N);
   const sampleCount = Math.ceil(N / stride);
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
@@ -77,20 +76,18 @@ export function scanGroup(task: ScanGroupTask, shouldStop?: () => boolean): Scan
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
   const entries = sliceEntries(task.slices);
-  const arrays = heldBuffers(entries, packed);
+  const { scratch, ...arrays } = scanWorkArrays(workspace, entries, alphabetSize);
   gatherSlices(task.pieces, task.pieceWords, task.slices, arrays.order, arrays.words);
   // Carried words as in scanReturns, refreshed at multiples of perWord from the shared array, and
-  // at firstN too unless the slices brought them.
+  // at firstN too unless the slices brought them. A group cannot poll a stop request (it runs on
+  // another thread); a host that cancels ends its threads instead.
   const r: Refinement = { ...arrays, active: entries, wordsLoaded: task.pieceWords.some((w) => w.length > 0) };
-  const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, bits, packed, entries), sample, geometry, shouldStop };
+  const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, scratch), sample, geometry, shouldStop: undefined };
   const sums: LevelSums[] = [];
   const active: number[] = [];
   for (let n = firstN; n <= maxN; n++) {
     const level = emptySums(bins, batchCount);
-    if (r.active > 0) {
-      if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
-      refineLevel(r, n, context, level);
-    }
+    if (r.active > 0) refineLevel(r, n, context, level);
     sums.push(level);
     active.push(r.active);
   }
@@ -139,43 +136,6 @@ function refineLevel(r: Refinement, n: number, context: RefinementContext, sums:
   r.active = outcome.active;
   [r.order, r.next] = [r.next, r.order];
   [r.words, r.nextWords] = [r.nextWords, r.words];
-}
-
-/** A thread's working arrays of its last group, kept for the next one (see heldBuffers). */
-let held: RefinementArrays | null = null;
-
-/**
- * Working arrays for a group of `entries` positions: views of the ones this thread used for its
- * previous group when they are large enough. A thread runs its groups one after another, and fresh
- * memory costs a page fault per page on first touch (about 3 ms per MB on this machine, measured),
- * which a thread taking several groups would pay for each.
- */
-function heldBuffers(entries: number, packed: boolean): RefinementArrays {
-  const wordEntries = packed ? entries : 0;
-  if (held === null || held.order.length < entries || held.words.length < wordEntries) {
-    held = { order: new Int32Array(entries), next: new Int32Array(entries), words: new Uint16Array(wordEntries), nextWords: new Uint16Array(wordEntries) };
-  }
-  return {
-    order: held.order.subarray(0, entries),
-    next: held.next.subarray(0, entries),
-    words: held.words.subarray(0, wordEntries),
-    nextWords: held.nextWords.subarray(0, wordEntries),
-  };
-}
-
-/**
- * The refinement's working buffers for `length` positions of `symbols`, `bits` bits a symbol; the
- * scratch copy of the symbols is needed only when they are not packed into words.
- */
-function refinementBuffers(symbols: SymbolArray, alphabetSize: number, bits: number, packed: boolean, length: number): RefinementBuffers {
-  return {
-    symbols,
-    packed,
-    symbolMask: (1 << bits) - 1,
-    counts: new Int32Array(alphabetSize),
-    touched: new Int32Array(Math.min(alphabetSize, symbols.length) + 1),
-    scratch: allocateSymbols(packed ? 0 : length, alphabetSize),
-  };
 }
 
 /** words[k] = the carried word at `offset` of the position at order[k]: allWords[p + offset]. */
@@ -265,7 +225,7 @@ export async function scanReturnsSplit(
   const shouldStop = options.shouldStop;
   const paths = new Float64Array(sampleCount * maxN).fill(NaN);
   const pathCounts = new Float64Array(sampleCount * maxN);
-  const { bits, packed } = wordLayout(alphabetSize);
+  const { packed } = wordLayout(alphabetSize);
   const sample: SampleSink = { mask: stride - 1, shift: Math.log2(stride), maxN, forward: paths, counts: pathCounts };
   const geometry: ReturnGeometry = { N, batchShift: Math.log2(batchLength), matchWindow, matchEnd: N - maxN };
   const levels: LevelStats[] = [];
@@ -307,7 +267,7 @@ export async function scanReturnsSplit(
       active: activeLength,
       wordsLoaded: false,
     };
-    const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, bits, packed, activeLength), sample, geometry, shouldStop };
+    const context: RefinementContext = { alphabetSize, allWords, buffers: refinementBuffers(symbols, alphabetSize, allocateSymbols(packed ? 0 : activeLength, alphabetSize)), sample, geometry, shouldStop };
     for (; n <= maxN; n++) {
       if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
       const sums = emptySums(bins, batchCount);
@@ -341,7 +301,7 @@ export async function scanReturnsSplit(
     }
   }
   if (jobs !== null) {
-    // Largest first: a thread's first group then sizes the arrays it keeps for the rest (heldBuffers).
+    // Largest first: a thread's first group then sizes the arrays it keeps for the rest (scanJobs.ts).
     jobs.sort((a, b) => entriesOf(b) - entriesOf(a));
     // Jobs on other threads cannot poll shouldStop; a host that cancels ends its threads instead.
     if (shouldStop !== undefined && shouldStop()) throw new ScanCancelled();
