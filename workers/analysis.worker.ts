@@ -77,17 +77,13 @@ function symbolizedPart(read: ReadResult, options: ReaderOptions): { sequence: S
 }
 
 /** Refuses, before the scan, a run whose estimated peak memory exceeds the page's budget (core:
- * pageMemoryCheck), counting the sub-workers when the scan will be shared (scanThreads). */
+ * pageMemoryCheck), counting the sub-workers when the scan will be shared (sharingCores). */
 function checkMemory(sequence: Sequence, settings: AnalysisSettings): void {
-  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN, threads: scanThreads(sequence), symbolsShared: isShared(sequence.symbols) });
+  pageMemoryCheck({ symbols: sequence.symbols.length, alphabetSize: sequence.alphabet.length, maxN: settings.maxN, threads: sharingCores(sequence.symbols.length), symbolsShared: isShared(sequence.symbols) });
 }
 
-/** Sub-workers the scan of this sequence runs on: one per core when the page is cross-origin
- * isolated and the sequence has at least SHARE_FROM_SYMBOLS symbols, else 1 (this worker). */
-function scanThreads(sequence: Sequence): number {
-  return sharingCores(sequence.symbols.length);
-}
-
+/** Sub-workers a scan of this many symbols runs on: one per core when the page is cross-origin
+ * isolated and there are at least SHARE_FROM_SYMBOLS symbols, else 1 (this worker). */
 function sharingCores(symbols: number): number {
   const cores = navigator.hardwareConcurrency || 1;
   return cores >= 2 && self.crossOriginIsolated && symbols >= SHARE_FROM_SYMBOLS ? cores : 1;
@@ -100,9 +96,12 @@ function sharingCores(symbols: number): number {
  */
 function earlyPool(bytes: number): JobPool | null {
   const cores = sharingCores(bytes);
-  return cores > 1 ? jobPool(Array.from({ length: cores }, subWorkerPort)) : null;
+  return cores > 1 ? subWorkerPool(cores) : null;
 }
 
+function subWorkerPool(count: number): JobPool {
+  return jobPool(Array.from({ length: count }, subWorkerPort));
+}
 
 /** One sub-worker as the job pool sees it; it ends with the scan (or with this worker). */
 function subWorkerPort(): JobPort {
@@ -144,7 +143,7 @@ async function analyzeOnWorkers(
   }
   // Read into shared memory when the sub-workers were started ahead (earlyPool); else copied there.
   const shared = sharedSymbols(sequence.symbols);
-  const pool = early ?? jobPool(Array.from({ length: cores }, subWorkerPort));
+  const pool = early ?? subWorkerPool(cores);
   try {
     return await analyzeSequenceSplit({ ...sequence, symbols: shared }, input, settings, cores, pool.run, hooks, pool.close);
   } finally {
